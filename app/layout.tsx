@@ -1,0 +1,24 @@
+import type { Metadata, Viewport } from "next";
+import type { ReactNode } from "react";
+import { Providers } from "@/components/providers";
+import { SkipLink } from "@/components/ui";
+import { display, sans } from "./fonts";
+import "./globals.css";
+
+export const metadata: Metadata = {
+  title: { default: "Mottle", template: "%s · Mottle" },
+  description: "Finishes, sample boards, client decisions and specifications for design studios.",
+};
+
+export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#f6f6f4" };
+
+export default function RootLayout({ children }: { children: ReactNode }) {
+  return (
+    <html lang="en-AU" className={`${sans.variable} ${display.variable}`}>
+      <body className="min-h-dvh bg-paper font-sans text-ink antialiased">
+        <SkipLink />
+        <Providers>{children}</Providers>
+      </body>
+    </html>
+  );
+}

@@ -1,0 +1,18 @@
+import type { ReactNode } from "react";
+import { AppShell } from "@/components/layout/app-shell";
+import { requireRole } from "@/lib/auth/session";
+
+export default async function StudioLayout({ children }: { children: ReactNode }) {
+  const actor = await requireRole("designer");
+  return (
+    <AppShell
+      who={`${actor.name ?? actor.email} · ${actor.studio?.name ?? ""}`}
+      nav={[
+        { href: "/studio", label: "Projects" },
+        { href: "/studio/team", label: "Team" },
+      ]}
+    >
+      {children}
+    </AppShell>
+  );
+}

@@ -1,0 +1,34 @@
+"use server";
+
+import { revalidatePath } from "next/cache";
+import { headers } from "next/headers";
+import { addProjectMember } from "@/db/queries/projects";
+import { failure, formValues, type ActionResult } from "@/lib/actions/result";
+import { requireApiUser } from "@/lib/auth/session";
+import { invitationMessage } from "@/lib/mail/messages";
+import { appUrl, sendMail } from "@/lib/mail/send";
+import { inviteToProjectSchema } from "@/lib/validation/auth";
+
+export async function inviteToProjectAction(projectId: string, _prev: ActionResult, form: FormData): Promise<ActionResult> {
+  try {
+    const actor = await requireApiUser("designer");
+    const input = inviteToProjectSchema.parse(formValues(form));
+    const { project, user } = await addProjectMember(actor, projectId, input);
+    const origin = (await headers()).get("origin") ?? undefined;
+    const url = appUrl(`/sign-in?email=${encodeURIComponent(user.email)}`, origin);
+    await sendMail({
+      to: user.email,
+      ...invitationMessage({
+        url,
+        studioName: actor.studio?.name ?? "Your designer",
+        inviterName: actor.name ?? actor.email,
+        role: input.role,
+        projectName: project.name,
+      }),
+    });
+    revalidatePath(`/studio/projects/${projectId}`);
+    return { ok: true, data: undefined };
+  } catch (error) {
+    return failure(error);
+  }
+}

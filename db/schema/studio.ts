@@ -1,0 +1,106 @@
+import { index, integer, primaryKey, sqliteTable, text, uniqueIndex } from "drizzle-orm/sqlite-core";
+import { users } from "./auth";
+import { createdAt, day, id } from "./columns";
+
+export const studios = sqliteTable("studio", {
+  id: id(),
+  name: text("name").notNull(),
+  /** Studio overrides of the colour-check thresholds, as JSON; absent keys use the defaults. */
+  checkSettings: text("check_settings", { mode: "json" }).$type<Record<string, number>>(),
+  createdAt: createdAt(),
+});
+export type Studio = typeof studios.$inferSelect;
+
+export const studioRoles = ["owner", "designer"] as const;
+export type StudioRole = (typeof studioRoles)[number];
+
+export const studioMembers = sqliteTable(
+  "studio_member",
+  {
+    studioId: text("studio_id")
+      .notNull()
+      .references(() => studios.id, { onDelete: "cascade" }),
+    userId: text("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    role: text("role", { enum: studioRoles }).notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [primaryKey({ columns: [t.studioId, t.userId] }), index("studio_member_user_idx").on(t.userId)],
+);
+export type StudioMember = typeof studioMembers.$inferSelect;
+
+export const trades = ["stone", "joinery", "flooring", "tiles", "tapware", "hardware", "lighting", "appliances", "paint"] as const;
+export type Trade = (typeof trades)[number];
+
+export const suppliers = sqliteTable(
+  "supplier",
+  {
+    id: id(),
+    studioId: text("studio_id")
+      .notNull()
+      .references(() => studios.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    trade: text("trade", { enum: trades }).notNull(),
+    email: text("email"),
+    phone: text("phone"),
+    createdAt: createdAt(),
+  },
+  (t) => [index("supplier_studio_idx").on(t.studioId)],
+);
+export type Supplier = typeof suppliers.$inferSelect;
+
+export const projects = sqliteTable(
+  "project",
+  {
+    id: id(),
+    studioId: text("studio_id")
+      .notNull()
+      .references(() => studios.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    siteAddress: text("site_address"),
+    installDate: day("install_date"),
+    archivedAt: integer("archived_at", { mode: "timestamp_ms" }),
+    createdAt: createdAt(),
+  },
+  (t) => [index("project_studio_idx").on(t.studioId)],
+);
+export type Project = typeof projects.$inferSelect;
+
+export const projectRoles = ["client", "supplier"] as const;
+export type ProjectRole = (typeof projectRoles)[number];
+
+export const projectMembers = sqliteTable(
+  "project_member",
+  {
+    id: id(),
+    projectId: text("project_id")
+      .notNull()
+      .references(() => projects.id, { onDelete: "cascade" }),
+    userId: text("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    role: text("role", { enum: projectRoles }).notNull(),
+    /** Set for supplier members: the company whose lines they may see. */
+    supplierId: text("supplier_id").references(() => suppliers.id, { onDelete: "cascade" }),
+    invitedBy: text("invited_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("project_member_unique").on(t.projectId, t.userId), index("project_member_user_idx").on(t.userId)],
+);
+export type ProjectMember = typeof projectMembers.$inferSelect;
+
+export const rooms = sqliteTable(
+  "room",
+  {
+    id: id(),
+    projectId: text("project_id")
+      .notNull()
+      .references(() => projects.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    sortOrder: integer("sort_order").notNull().default(0),
+    createdAt: createdAt(),
+  },
+  (t) => [index("room_project_idx").on(t.projectId)],
+);
+export type Room = typeof rooms.$inferSelect;

@@ -1,0 +1,70 @@
+import { randomBytes } from "node:crypto";
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from "node:fs";
+import path from "node:path";
+import { z } from "zod";
+
+/**
+ * The one reader of process.env. Every default works on a fresh clone: an embedded SQLite file,
+ * the local mail catcher and a generated AUTH_SECRET kept in a gitignored file.
+ */
+const dataDir = path.resolve(process.cwd(), ".data");
+
+const schema = z
+  .object({
+    MOTTLE_MODE: z.enum(["development", "demo", "test", "production"]).optional(),
+    NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
+    DATABASE_URL: z
+      .string()
+      .refine((v) => /^(file:|libsql:\/\/|https?:\/\/|wss?:\/\/)/.test(v), {
+        message: "DATABASE_URL must be a file: URL or the libsql://, http(s):// or ws(s):// URL of a libSQL server",
+      })
+      .default(`file:${path.join(dataDir, "mottle.db")}`),
+    DATABASE_AUTH_TOKEN: z.string().min(1).optional(),
+    SMTP_URL: z.string().url().default("smtp://127.0.0.1:2525"),
+    MAIL_FROM: z.string().min(3).default("Mottle <no-reply@mottle.example>"),
+    MAIL_CATCHER_DIR: z.string().default(path.join(dataDir, "mail")),
+    UPLOADS_DIR: z.string().default(path.resolve(process.cwd(), "uploads")),
+    AUTH_SECRET: z.string().min(32).optional(),
+    APP_URL: z.string().url().optional(),
+  })
+  .transform((raw) => {
+    const mode = raw.MOTTLE_MODE ?? (raw.NODE_ENV === "production" ? "production" : raw.NODE_ENV);
+    return { ...raw, MOTTLE_MODE: mode };
+  });
+
+export type Env = z.infer<typeof schema>;
+
+function readOrCreateSecret(): string {
+  const file = path.join(dataDir, "auth-secret");
+  if (existsSync(file)) return readFileSync(file, "utf8").trim();
+  mkdirSync(dataDir, { recursive: true });
+  const secret = randomBytes(32).toString("base64url");
+  // wx: if two processes race, the loser's write fails and it reads the winner's secret.
+  try {
+    writeFileSync(file, secret, { flag: "wx", mode: 0o600 });
+    return secret;
+  } catch {
+    return readFileSync(file, "utf8").trim();
+  }
+}
+
+function loadEnv(): Env & { AUTH_SECRET: string } {
+  const parsed = schema.safeParse(process.env);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join(".")}: ${i.message}`).join("\n");
+    throw new Error(`Mottle cannot start: the environment is not valid.\n${lines}`);
+  }
+  const env = parsed.data;
+  if (env.MOTTLE_MODE === "production" && !env.AUTH_SECRET) {
+    throw new Error("Mottle cannot start: set AUTH_SECRET (at least 32 characters) in production.");
+  }
+  const secret = env.AUTH_SECRET ?? readOrCreateSecret();
+  // Auth.js reads AUTH_SECRET itself; keep it in step with what we resolved.
+  process.env.AUTH_SECRET = secret;
+  return { ...env, AUTH_SECRET: secret };
+}
+
+export const env = loadEnv();
+
+/** The dev mail inbox and other conveniences exist only outside production. */
+export const isDevLike = env.MOTTLE_MODE !== "production";
