@@ -10,7 +10,7 @@ export const metadata: Metadata = {
   description: "Finishes, sample boards, client decisions and specifications for design studios.",
 };
 
-export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#f6f6f4" };
+export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#fafafa" };
 
 export default function RootLayout({ children }: { children: ReactNode }) {
   return (

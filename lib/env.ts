@@ -55,7 +55,9 @@ function loadEnv(): Env & { AUTH_SECRET: string } {
     throw new Error(`Mottle cannot start: the environment is not valid.\n${lines}`);
   }
   const env = parsed.data;
-  if (env.MOTTLE_MODE === "production" && !env.AUTH_SECRET) {
+  // `next build` evaluates this module too; the secret is only demanded of a running server.
+  const building = process.env.NEXT_PHASE === "phase-production-build";
+  if (env.MOTTLE_MODE === "production" && !env.AUTH_SECRET && !building) {
     throw new Error("Mottle cannot start: set AUTH_SECRET (at least 32 characters) in production.");
   }
   const secret = env.AUTH_SECRET ?? readOrCreateSecret();

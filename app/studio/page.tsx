@@ -53,7 +53,7 @@ export default async function StudioHome() {
             <li key={p.id}>
               <Link
                 href={`/studio/projects/${p.id}`}
-                className="block h-full rounded-lg border border-line bg-white p-5 hover:border-ink-soft"
+                className="block h-full rounded-lg border border-line bg-card p-5 hover:border-ink-soft"
               >
                 <h2 className="font-display text-xl">{p.name}</h2>
                 {p.siteAddress ? <p className="text-ink-soft">{p.siteAddress}</p> : null}

@@ -4,14 +4,14 @@ import type { ActionResult } from "@/lib/actions/result";
 export function FormMessage({ state, success }: { state: ActionResult<unknown>; success?: string }) {
   if (state.ok && success) {
     return (
-      <p role="status" className="rounded-md bg-ok-soft px-3 py-2 text-ok-ink">
+      <p role="status" className="rounded-md bg-ok-wash px-3 py-2 text-ok-ink">
         {success}
       </p>
     );
   }
   if (!state.ok && state.error) {
     return (
-      <p role="alert" className="rounded-md bg-problem-soft px-3 py-2 text-problem-ink">
+      <p role="alert" className="rounded-md bg-problem-wash px-3 py-2 text-problem-ink">
         {state.error}
       </p>
     );

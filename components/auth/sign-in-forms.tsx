@@ -11,7 +11,7 @@ export function LinkSignInForm({ callbackUrl, defaultEmail }: { callbackUrl: str
   const errors = state.ok ? undefined : state.fieldErrors;
   const ids = fieldIds("link-email");
   return (
-    <form action={action} className="space-y-4 rounded-lg border border-line bg-white p-5" noValidate>
+    <form action={action} className="space-y-4 rounded-lg border border-line bg-card p-5" noValidate>
       <h2 className="font-display text-xl">E-mail me a sign-in link</h2>
       <input type="hidden" name="callbackUrl" value={callbackUrl} />
       <Field label="E-mail address" htmlFor="link-email" error={errors?.email}>
@@ -38,7 +38,7 @@ export function PasswordSignInForm({ callbackUrl }: { callbackUrl: string }) {
   const [state, action, pending] = useActionState(signInWithPassword, idle);
   const errors = state.ok ? undefined : state.fieldErrors;
   return (
-    <form action={action} className="space-y-4 rounded-lg border border-line bg-white p-5" noValidate>
+    <form action={action} className="space-y-4 rounded-lg border border-line bg-card p-5" noValidate>
       <h2 className="font-display text-xl">Studio staff: sign in with your password</h2>
       <input type="hidden" name="callbackUrl" value={callbackUrl} />
       <Field label="E-mail address" htmlFor="password-email" error={errors?.email}>

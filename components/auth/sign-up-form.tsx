@@ -11,7 +11,7 @@ export function SignUpForm() {
   const [state, action, pending] = useActionState(signUp, idle);
   const errors = state.ok ? undefined : state.fieldErrors;
   return (
-    <form action={action} className="space-y-4 rounded-lg border border-line bg-white p-5" noValidate>
+    <form action={action} className="space-y-4 rounded-lg border border-line bg-card p-5" noValidate>
       <TextField name="studioName" label="Studio name" autoComplete="organization" errors={errors} />
       <TextField name="name" label="Your name" autoComplete="name" errors={errors} />
       <TextField name="email" label="E-mail address" type="email" autoComplete="email" errors={errors} />

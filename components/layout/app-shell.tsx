@@ -9,7 +9,7 @@ export type NavItem = { href: string; label: string };
 export function AppShell({ nav, who, children }: { nav: NavItem[]; who: string; children: ReactNode }) {
   return (
     <div className="flex min-h-dvh flex-col">
-      <header className="no-print border-b border-line bg-white">
+      <header className="no-print border-b border-line bg-card">
         <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3 sm:px-6">
           <Link href="/home" className="inline-flex rounded-md" aria-label="Mottle home">
             <Logo />
@@ -20,7 +20,7 @@ export function AppShell({ nav, who, children }: { nav: NavItem[]; who: string; 
                 <li key={item.href}>
                   <Link
                     href={item.href}
-                    className="inline-flex min-h-11 items-center rounded-md px-3 text-ink hover:bg-paper-deep"
+                    className="inline-flex min-h-11 items-center rounded-md px-3 text-ink hover:bg-stone-100"
                   >
                     {item.label}
                   </Link>

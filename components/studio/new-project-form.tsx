@@ -11,7 +11,7 @@ export function NewProjectForm() {
   const [state, action, pending] = useActionState(createProjectAction, idle);
   const errors = state.ok ? undefined : state.fieldErrors;
   return (
-    <form action={action} className="space-y-4 rounded-lg border border-line bg-white p-5" noValidate>
+    <form action={action} className="space-y-4 rounded-lg border border-line bg-card p-5" noValidate>
       <TextField name="name" label="Project name" placeholder="Hillcrest Road terrace" errors={errors} />
       <TextField name="siteAddress" label="Site address (optional)" errors={errors} />
       <TextField name="installDate" label="Target install date (optional)" type="date" hint="Order-by dates count back from this." errors={errors} />

@@ -1,6 +1,6 @@
 import { and, asc, eq, inArray, isNull, or, sql } from "drizzle-orm";
 import { db } from "@/db";
-import { decisions, projectMembers, projects, rooms, studioMembers, suppliers, users } from "@/db/schema";
+import { projectMembers, projects, rooms, studioMembers, suppliers, users } from "@/db/schema";
 import { projectRole } from "@/lib/auth/permissions";
 import { conflict, forbidden, HttpError, notFound } from "@/lib/http";
 import type { InviteToProjectInput } from "@/lib/validation/auth";
@@ -22,8 +22,9 @@ export async function listProjectsForActor(actor: Actor) {
       name: projects.name,
       siteAddress: projects.siteAddress,
       installDate: projects.installDate,
-      openDecisions: sql<number>`(select count(*) from ${decisions} where ${decisions.projectId} = ${projects.id} and ${decisions.status} != 'locked')`,
-      nextDue: sql<string | null>`(select min(${decisions.dueDate}) from ${decisions} where ${decisions.projectId} = ${projects.id} and ${decisions.status} != 'locked')`,
+      // Raw column names: inside a correlated subquery drizzle would leave them unqualified.
+      openDecisions: sql<number>`(select count(*) from "decision" d where d."project_id" = "project"."id" and d."status" != 'locked')`,
+      nextDue: sql<string | null>`(select min(d."due_date") from "decision" d where d."project_id" = "project"."id" and d."status" != 'locked')`,
     })
     .from(projects)
     .where(and(visible, isNull(projects.archivedAt)))

@@ -2,6 +2,7 @@
 
 import { AuthError } from "next-auth";
 import { isRedirectError } from "next/dist/client/components/redirect-error";
+import { redirect } from "next/navigation";
 import { signIn } from "@/lib/auth";
 import { failure, formValues, type ActionResult } from "@/lib/actions/result";
 import { safeCallback } from "@/lib/auth/callback";
@@ -35,10 +36,11 @@ export async function requestSignInLink(_prev: ActionResult, form: FormData): Pr
   const parsed = linkRequestSchema.safeParse(values);
   if (!parsed.success) return failure(parsed.error);
   try {
-    await signIn("nodemailer", { email: parsed.data.email, redirectTo: safeCallback(values.callbackUrl) });
-    return { ok: true, data: undefined };
+    // redirect: false, then our own redirect: the client router cannot follow Auth.js's API-route redirect.
+    await signIn("nodemailer", { email: parsed.data.email, redirectTo: safeCallback(values.callbackUrl), redirect: false });
   } catch (error) {
     if (isRedirectError(error)) throw error;
     return failure(error);
   }
+  redirect("/sign-in/check-email");
 }

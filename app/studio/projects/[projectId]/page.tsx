@@ -27,7 +27,7 @@ export default async function ProjectPage({ params }: Props) {
         title={project.name}
         description={[project.siteAddress, `Install ${formatDay(project.installDate)}`].filter(Boolean).join(" · ")}
       />
-      <div className="grid gap-6 lg:grid-cols-2">
+      <div className="grid items-start gap-6 lg:grid-cols-2">
         <Card title="Rooms">
           {rooms.length === 0 ? (
             <p className="text-ink-soft">No rooms yet.</p>

@@ -1,0 +1,54 @@
+import type { Metadata } from "next";
+import { todayUtc } from "@/db/queries/attention";
+import { getClientHome } from "@/db/queries/homes";
+import { Badge, Card, EmptyState, Notice, PageHeader } from "@/components/ui";
+import { requireRole } from "@/lib/auth/session";
+import { describeDue, formatDay } from "@/lib/format";
+
+export const metadata: Metadata = { title: "My project" };
+
+export default async function ClientHome() {
+  const actor = await requireRole("client");
+  const { projects, waiting } = await getClientHome(actor);
+  const today = todayUtc();
+  return (
+    <div className="space-y-8">
+      {projects.map((project) => {
+        const mine = waiting.filter((d) => d.projectId === project.id);
+        return (
+          <section key={project.id} className="space-y-6" aria-labelledby={`project-${project.id}`}>
+            <PageHeader
+              eyebrow="Your renovation"
+              title={project.name}
+              description={`Install planned for ${formatDay(project.installDate)}`}
+            />
+            <Card title={mine.length ? `Waiting for you (${mine.length})` : "Waiting for you"}>
+              {mine.length === 0 ? (
+                <EmptyState title="Nothing to decide right now">
+                  Your designer will e-mail you when there&apos;s a choice to make.
+                </EmptyState>
+              ) : (
+                <ul className="divide-y divide-line">
+                  {mine.map((d) => (
+                    <li key={d.id} className="flex flex-col gap-2 py-4 sm:flex-row sm:items-center sm:justify-between">
+                      <span>
+                        <span className="block text-lg font-medium">{d.title}</span>
+                        <span className="text-ink-soft">{d.roomName}</span>
+                      </span>
+                      <Badge tone={d.dueDate < today ? "problem" : d.status === "chosen" ? "info" : "caution"}>
+                        {d.status === "chosen" ? "Picked, not yet approved" : "To choose"} · {describeDue(d.dueDate, today)}
+                      </Badge>
+                    </li>
+                  ))}
+                </ul>
+              )}
+            </Card>
+          </section>
+        );
+      })}
+      <Notice tone="info" title="About colours on screen">
+        Colour on a screen or in a photo is not the finish. Approve from physical samples under your room&apos;s own light.
+      </Notice>
+    </div>
+  );
+}

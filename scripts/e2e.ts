@@ -1,0 +1,44 @@
+import { existsSync, mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
+import { ensureChromium } from "./ensure-chromium";
+import { freePort, run, startNext } from "./lib/processes";
+
+/**
+ * Browser tests against the production build: a fresh seeded database and mail catcher in a
+ * temporary folder, `next start` on a free port, then vitest with tests/e2e.
+ */
+const dir = mkdtempSync(path.join(tmpdir(), "mottle-e2e-"));
+const port = await freePort();
+const catcherPort = await freePort();
+const env: NodeJS.ProcessEnv = {
+  ...process.env,
+  NEXT_TELEMETRY_DISABLED: "1",
+  MOTTLE_MODE: "test",
+  DATABASE_URL: `file:${path.join(dir, "e2e.db")}`,
+  MAIL_CATCHER_DIR: path.join(dir, "mail"),
+  UPLOADS_DIR: path.join(dir, "uploads"),
+  SMTP_URL: `smtp://127.0.0.1:${catcherPort}`,
+  AUTH_TRUST_HOST: "true",
+  E2E_BASE_URL: `http://127.0.0.1:${port}`,
+  E2E_CATCHER_PORT: String(catcherPort),
+};
+
+await ensureChromium();
+if (!process.argv.includes("--no-build") || !existsSync(".next/BUILD_ID")) await run("npx", ["next", "build"], env);
+await run("npx", ["tsx", "--conditions=react-server", "scripts/seed.ts"], env);
+const { startMailCatcher } = await import("../lib/mail/catcher");
+const catcher = await startMailCatcher({ port: catcherPort, dir: env.MAIL_CATCHER_DIR ?? "" });
+const server = await startNext(port, env, true);
+let failed = false;
+try {
+  await run("npx", ["vitest", "run", "--config", "vitest.e2e.config.ts"], env);
+} catch (error) {
+  failed = true;
+  console.error(error instanceof Error ? error.message : error);
+} finally {
+  server.kill("SIGTERM");
+  await catcher.close();
+  rmSync(dir, { recursive: true, force: true });
+}
+process.exit(failed ? 1 : 0);
