@@ -29,7 +29,7 @@ if (!process.argv.includes("--no-build") || !existsSync(".next/BUILD_ID")) await
 await run("npx", ["tsx", "--conditions=react-server", "scripts/seed.ts"], env);
 const { startMailCatcher } = await import("../lib/mail/catcher");
 const catcher = await startMailCatcher({ port: catcherPort, dir: env.MAIL_CATCHER_DIR ?? "" });
-const server = await startNext(port, env, true);
+const server = await startNext(port, env, true, "127.0.0.1");
 let failed = false;
 try {
   await run("npx", ["vitest", "run", "--config", "vitest.e2e.config.ts"], env);

@@ -8,6 +8,7 @@ import { accounts, sessions, users, verificationTokens } from "@/db/schema";
 import { checkPassword } from "@/db/queries/passwords";
 import { getUserByEmail } from "@/db/queries/users";
 import { env } from "@/lib/env";
+import { safeCallback } from "@/lib/auth/callback";
 import { sendMail } from "@/lib/mail/send";
 import { signInLinkMessage } from "@/lib/mail/messages";
 import { signInSchema } from "@/lib/validation/auth";
@@ -54,6 +55,17 @@ export const { handlers, auth, signIn, signOut } = NextAuth({
     }),
   ],
   callbacks: {
+    // Only ever a path on this site: no open redirects, and no switch between localhost and
+    // 127.0.0.1 (which would leave the new session cookie behind on the other host name).
+    redirect({ url }) {
+      if (url.startsWith("/")) return safeCallback(url);
+      try {
+        const { pathname, search } = new URL(url);
+        return safeCallback(pathname + search);
+      } catch {
+        return "/home";
+      }
+    },
     async session({ session, token }) {
       if (token.sub) session.user.id = token.sub;
       return session;

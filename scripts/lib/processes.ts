@@ -13,8 +13,8 @@ export function run(command: string, args: string[], env: NodeJS.ProcessEnv = pr
 }
 
 /** Starts `next start` on a port and waits until it answers. */
-export async function startNext(port: number, env: NodeJS.ProcessEnv, quiet = false): Promise<ChildProcess> {
-  const child = spawn("npx", ["next", "start", "-p", String(port), "-H", "127.0.0.1"], {
+export async function startNext(port: number, env: NodeJS.ProcessEnv, quiet = false, host?: string): Promise<ChildProcess> {
+  const child = spawn("npx", ["next", "start", "-p", String(port), ...(host ? ["-H", host] : [])], {
     stdio: quiet ? ["ignore", "ignore", "inherit"] : "inherit",
     env: { ...env, NEXT_TELEMETRY_DISABLED: "1", PORT: String(port) },
     detached: false,

@@ -1,0 +1,25 @@
+import { describe, expect, it, vi } from "vitest";
+import { sendMail } from "@/lib/mail/send";
+import { signInLinkMessage } from "@/lib/mail/messages";
+
+describe("GET /api/dev/mail", () => {
+  it("lists caught mail newest first, with links decoded", async () => {
+    const url = "http://localhost:3000/api/auth/callback/nodemailer?token=abc%3D%3D&email=client%40demo.example&callbackUrl=%2Fclient";
+    await sendMail({ to: "client@demo.example", ...signInLinkMessage({ url, host: "localhost:3000" }) });
+    const { GET } = await import("@/app/api/dev/mail/route");
+    const res = await GET(new Request("http://test/api/dev/mail?to=client@demo.example"), {});
+    expect(res.status).toBe(200);
+    const [message] = (await res.json()) as { to: string[]; subject: string; links: string[]; receivedAt: string }[];
+    expect(message?.to).toEqual(["client@demo.example"]);
+    expect(message?.links).toContain(url);
+  });
+
+  it("does not exist in production", async () => {
+    vi.resetModules();
+    vi.stubEnv("MOTTLE_MODE", "production");
+    const { GET } = await import("@/app/api/dev/mail/route");
+    const res = await GET(new Request("http://test/api/dev/mail"), {});
+    expect(res.status).toBe(404);
+    vi.unstubAllEnvs();
+  });
+});

@@ -1,0 +1,41 @@
+import { mkdtempSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
+import { afterAll, vi } from "vitest";
+import { startMailCatcher } from "@/lib/mail/catcher";
+
+/**
+ * Each integration test file gets a fresh libSQL file with the migrations applied and the demo
+ * studio seeded, its own mail catcher, and a stand-in for the Auth.js session so a test can act
+ * as any person (see tests/support/session.ts).
+ */
+const dir = mkdtempSync(path.join(tmpdir(), "mottle-it-"));
+const catcher = await startMailCatcher({ port: 0, dir: path.join(dir, "mail") });
+Object.assign(process.env, {
+  MOTTLE_MODE: "test",
+  DATABASE_URL: `file:${path.join(dir, "test.db")}`,
+  MAIL_CATCHER_DIR: path.join(dir, "mail"),
+  UPLOADS_DIR: path.join(dir, "uploads"),
+  SMTP_URL: `smtp://127.0.0.1:${catcher.port}`,
+  AUTH_SECRET: "integration-tests-secret-integration-tests-secret",
+});
+
+const { migrateDatabase } = await import("@/db/migrate");
+const { seedDemo } = await import("@/db/seed/demo");
+const { client, db } = await migrateDatabase(process.env.DATABASE_URL ?? "");
+await seedDemo(db);
+client.close();
+
+vi.mock("@/lib/auth", async () => {
+  const { sessionStub } = await import("@/tests/support/session");
+  return {
+    auth: async () => sessionStub.current,
+    signIn: async () => undefined,
+    signOut: async () => undefined,
+    handlers: {},
+  };
+});
+
+afterAll(async () => {
+  await catcher.close();
+});
