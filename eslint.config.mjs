@@ -2,7 +2,7 @@ import nextPlugin from "@next/eslint-plugin-next";
 import tseslint from "typescript-eslint";
 
 export default tseslint.config(
-  { ignores: [".next/**", "node_modules/**", "drizzle/**", "uploads/**", ".data/**", "tests/artifacts/**", "next-env.d.ts"] },
+  { ignores: [".next/**", ".next-*/**", "node_modules/**", "drizzle/**", "uploads/**", ".data/**", "tests/artifacts/**", "next-env.d.ts"] },
   ...tseslint.configs.recommended,
   {
     plugins: { "@next/next": nextPlugin },

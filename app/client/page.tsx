@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { todayUtc } from "@/db/queries/attention";
 import { getClientHome } from "@/db/queries/homes";
 import { Badge, Card, EmptyState, Notice, PageHeader } from "@/components/ui";
@@ -32,7 +33,9 @@ export default async function ClientHome() {
                   {mine.map((d) => (
                     <li key={d.id} className="flex flex-col gap-2 py-4 sm:flex-row sm:items-center sm:justify-between">
                       <span>
-                        <span className="block text-lg font-medium">{d.title}</span>
+                        <Link href={`/client/decisions/${d.id}`} className="block text-lg font-medium underline-offset-4 hover:underline">
+                          {d.title}
+                        </Link>
                         <span className="text-ink-soft">{d.roomName}</span>
                       </span>
                       <Badge tone={d.dueDate < today ? "problem" : d.status === "chosen" ? "info" : "caution"}>

@@ -9,6 +9,7 @@ export default async function StudioLayout({ children }: { children: ReactNode }
       who={`${actor.name ?? actor.email} · ${actor.studio?.name ?? ""}`}
       nav={[
         { href: "/studio", label: "Projects" },
+        { href: "/studio/library", label: "Library" },
         { href: "/studio/team", label: "Team" },
       ]}
     >

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { getSupplierHome } from "@/db/queries/homes";
 import { Badge, Card, EmptyState, PageHeader } from "@/components/ui";
 import { requireRole } from "@/lib/auth/session";
@@ -21,9 +22,9 @@ export default async function SupplierHome() {
             {revisions.map((r) => (
               <li key={r.revisionId} className="flex flex-col gap-2 py-4 sm:flex-row sm:items-center sm:justify-between">
                 <span>
-                  <span className="block text-lg font-medium">
+                  <Link href={`/supplier/revisions/${r.revisionId}`} className="block text-lg font-medium underline-offset-4 hover:underline">
                     {r.projectName} · Revision {r.letter}
-                  </span>
+                  </Link>
                   <span className="text-ink-soft tabular-nums">
                     {r.lineCount} {r.lineCount === 1 ? "line" : "lines"} · issued {r.issuedAt.toISOString().slice(0, 10)}
                   </span>
