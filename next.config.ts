@@ -1,9 +1,13 @@
 import type { NextConfig } from "next";
+import { staticSecurityHeaders } from "./lib/security-headers";
 
 const nextConfig: NextConfig = {
   poweredByHeader: false,
   // Lets two servers of one checkout run side by side (a dev server while tests use the build).
   distDir: process.env.NEXT_DIST_DIR ?? ".next",
+  async headers() {
+    return [{ source: "/:path*", headers: staticSecurityHeaders }];
+  },
   // Native and Node-only packages stay out of the bundle and load from node_modules at run time.
   serverExternalPackages: ["sharp", "@libsql/client", "smtp-server", "mailparser"],
 };

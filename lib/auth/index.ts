@@ -29,6 +29,8 @@ export const { handlers, auth, signIn, signOut } = NextAuth({
   session: { strategy: "jwt", maxAge: 30 * 24 * 60 * 60 },
   secret: env.AUTH_SECRET,
   trustHost: true,
+  // __Secure- cookies in production (behind HTTPS); plain cookies for the local demo on http.
+  useSecureCookies: env.MOTTLE_MODE === "production",
   pages: { signIn: "/sign-in", verifyRequest: "/sign-in/check-email", error: "/sign-in" },
   providers: [
     Credentials({
