@@ -1,0 +1,48 @@
+import { eq } from "drizzle-orm";
+import { db } from "@/db";
+import { boards, projects, rooms, studios } from "@/db/schema";
+import { projectRole } from "@/lib/auth/permissions";
+import { resolveThresholds } from "@/lib/boards/check-settings";
+import { forbidden, notFound } from "@/lib/http";
+import type { Actor } from "./users";
+
+export type BoardMode = "read" | "edit";
+
+/**
+ * Boards follow their project: the studio's staff edit, the project's clients read, and nobody
+ * else sees them. Suppliers are on the project but only ever see locked lines, so they get 403;
+ * anyone not on the project gets 404, as if the board did not exist.
+ */
+function checkRole(role: ReturnType<typeof projectRole>, mode: BoardMode, what: string): "edit" | "read" {
+  if (!role) throw notFound(what);
+  if (role === "supplier") throw forbidden();
+  if (mode === "edit" && role !== "staff") throw forbidden();
+  return role === "staff" ? "edit" : "read";
+}
+
+export async function openProjectForBoards(actor: Actor, projectId: string, mode: BoardMode) {
+  const project = await db.query.projects.findFirst({ where: eq(projects.id, projectId) });
+  if (!project) throw notFound("That project");
+  const access = checkRole(projectRole(actor, project.id, project.studioId), mode, "That project");
+  return { project, access };
+}
+
+/** A board with its project and room, or 404/403 as above. */
+export async function openBoard(actor: Actor, boardId: string, mode: BoardMode) {
+  const [row] = await db
+    .select({ board: boards, project: projects, room: rooms })
+    .from(boards)
+    .innerJoin(projects, eq(projects.id, boards.projectId))
+    .innerJoin(rooms, eq(rooms.id, boards.roomId))
+    .where(eq(boards.id, boardId))
+    .limit(1);
+  if (!row) throw notFound("That board");
+  const access = checkRole(projectRole(actor, row.project.id, row.project.studioId), mode, "That board");
+  return { ...row, access };
+}
+
+/** The thresholds this studio's checks use: its own settings over the defaults. */
+export async function getStudioThresholds(studioId: string) {
+  const studio = await db.query.studios.findFirst({ where: eq(studios.id, studioId), columns: { checkSettings: true } });
+  return resolveThresholds(studio?.checkSettings ?? null);
+}

@@ -1,0 +1,85 @@
+import { and, asc, eq } from "drizzle-orm";
+import { db } from "@/db";
+import { boards, rooms } from "@/db/schema";
+import { computeBoardChecks, countVerdicts, tintForLight } from "@/lib/boards/board-checks";
+import { DAYLIGHT } from "@/lib/boards/lights";
+import type { BoardList, BoardSummary } from "@/lib/boards/types";
+import { assembleBoardView } from "@/lib/boards/view";
+import { HttpError } from "@/lib/http";
+import type { CreateBoardInput } from "@/lib/validation/board";
+import { writeAudit } from "./audit";
+import { getStudioThresholds, openBoard, openProjectForBoards } from "./board-access";
+import { readItemRows, readPairRows } from "./board-rows";
+import { runBoardWrite } from "./board-version";
+import type { Actor } from "./users";
+
+/** The board with its items, pairs and checks under one light (daylight unless told). */
+export async function getBoardView(actor: Actor, boardId: string, cct: number = DAYLIGHT.cct) {
+  const { board, project, room, access } = await openBoard(actor, boardId, "read");
+  const [items, pairs, { thresholds, settingsIgnored }] = await Promise.all([
+    readItemRows([board.id]),
+    readPairRows([board.id]),
+    getStudioThresholds(project.studioId),
+  ]);
+  return assembleBoardView({
+    board: { id: board.id, name: board.name, version: board.version, updatedAt: board.updatedAt },
+    project: { id: project.id, name: project.name },
+    room: { id: room.id, name: room.name },
+    access,
+    items,
+    pairs: pairs.map(({ boardId: _b, ...pair }) => pair),
+    cct,
+    thresholds,
+    settingsIgnored,
+  });
+}
+
+/** Every room of the project with its boards, each with a verdict count in daylight. */
+export async function listBoards(actor: Actor, projectId: string): Promise<BoardList> {
+  const { project, access } = await openProjectForBoards(actor, projectId, "read");
+  const [roomRows, boardRows, { thresholds }] = await Promise.all([
+    db.select().from(rooms).where(eq(rooms.projectId, project.id)).orderBy(asc(rooms.sortOrder), asc(rooms.name)),
+    db.select().from(boards).where(eq(boards.projectId, project.id)).orderBy(asc(boards.createdAt), asc(boards.name)),
+    getStudioThresholds(project.studioId),
+  ]);
+  const ids = boardRows.map((b) => b.id);
+  const [items, pairs] = await Promise.all([readItemRows(ids), readPairRows(ids)]);
+  const summaries = boardRows.map((board): BoardSummary => {
+    const mine = items.filter((i) => i.boardId === board.id);
+    const checked = mine.map((i) => ({ id: i.id, lab: [i.labL, i.labA, i.labB] as const, lrv: i.lrv }));
+    const minePairs = pairs.filter((p) => p.boardId === board.id);
+    const checks = computeBoardChecks(checked, minePairs, DAYLIGHT.cct, thresholds);
+    return {
+      id: board.id,
+      name: board.name,
+      roomId: board.roomId,
+      version: board.version,
+      updatedAt: board.updatedAt.toISOString(),
+      itemCount: mine.length,
+      pairCount: minePairs.length,
+      counts: countVerdicts(checks),
+      preview: [...mine].sort((p, q) => q.width * q.height - p.width * p.height).slice(0, 6).map((i) => tintForLight([i.labL, i.labA, i.labB], DAYLIGHT.cct)),
+    };
+  });
+  return {
+    project: { id: project.id, name: project.name },
+    access,
+    rooms: roomRows.map((room) => ({ id: room.id, name: room.name, boards: summaries.filter((b) => b.roomId === room.id) })),
+  };
+}
+
+/** A new, empty board in one of the project's rooms. */
+export async function createBoard(actor: Actor, projectId: string, input: CreateBoardInput) {
+  const { project } = await openProjectForBoards(actor, projectId, "edit");
+  const room = await db.query.rooms.findFirst({ where: and(eq(rooms.id, input.roomId), eq(rooms.projectId, project.id)) });
+  if (!room) throw new HttpError(400, "Choose one of this project's rooms.", { roomId: ["Choose one of this project's rooms."] });
+  return runBoardWrite(async (tx) => {
+    const [board] = await tx.insert(boards).values({ projectId: project.id, roomId: room.id, name: input.name }).returning();
+    if (!board) throw new Error("board insert returned nothing");
+    await writeAudit(
+      { studioId: project.studioId, projectId: project.id, actorId: actor.userId, action: "board.created", entityType: "board", entityId: board.id, detail: { name: board.name } },
+      tx,
+    );
+    return board;
+  });
+}

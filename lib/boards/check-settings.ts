@@ -1,0 +1,47 @@
+import { defaultThresholds, mergeThresholds } from "@/lib/colour";
+import type { ThresholdOverrides, Thresholds } from "@/lib/colour";
+
+type Group = keyof Thresholds;
+const groups = Object.keys(defaultThresholds) as Group[];
+
+function isRecord(value: unknown): value is Record<string, unknown> {
+  return typeof value === "object" && value !== null && !Array.isArray(value);
+}
+
+/**
+ * A studio's stored check settings as threshold overrides. The column is loose JSON, so both
+ * shapes are read: nested (`{ "match": { "noticeable": 1.5 } }`) and flat with dotted keys
+ * (`{ "match.noticeable": 1.5 }`). Unknown keys and non-numbers are dropped.
+ */
+export function readCheckSettings(raw: unknown): ThresholdOverrides {
+  if (!isRecord(raw)) return {};
+  const out: Record<string, Record<string, number>> = {};
+  const put = (group: string, key: string, value: unknown) => {
+    if (!groups.includes(group as Group) || typeof value !== "number" || !Number.isFinite(value)) return;
+    if (!Object.hasOwn(defaultThresholds[group as Group], key)) return;
+    (out[group] ??= {})[key] = value;
+  };
+  for (const [key, value] of Object.entries(raw)) {
+    if (isRecord(value)) for (const [inner, v] of Object.entries(value)) put(key, inner, v);
+    else {
+      const [group, inner, ...rest] = key.split(".");
+      if (group && inner && rest.length === 0) put(group, inner, value);
+    }
+  }
+  return out as ThresholdOverrides;
+}
+
+/**
+ * The thresholds a studio's boards are judged by. Settings that contradict each other (say a
+ * "noticeable" below "imperceptible") can't be used, so the checks fall back to the defaults
+ * rather than fail the whole board; `settingsIgnored` lets the screen say so.
+ */
+export function resolveThresholds(raw: unknown): { thresholds: Thresholds; settingsIgnored: boolean } {
+  const overrides = readCheckSettings(raw);
+  try {
+    return { thresholds: mergeThresholds(overrides), settingsIgnored: false };
+  } catch (error) {
+    if (error instanceof RangeError) return { thresholds: defaultThresholds, settingsIgnored: true };
+    throw error;
+  }
+}
