@@ -3,6 +3,7 @@ import * as t from "@/db/schema";
 import { seedDemoBoard } from "./demo-board";
 import { seedDemoDecisions } from "./demo-decisions";
 import { seedDemoRevision } from "./demo-revision";
+import { seedDemoSpec } from "./demo-spec";
 import { demoId } from "./ids";
 
 type Ctx = { studio: string; user: (key: string) => string; supplierKeys: readonly string[] };
@@ -36,5 +37,6 @@ export async function seedDemoProject(db: Database, ctx: Ctx) {
   ]).onConflictDoNothing();
   await seedDemoBoard(db, project);
   await seedDemoDecisions(db, { project, user: ctx.user });
+  await seedDemoSpec(db);
   await seedDemoRevision(db, { studio: ctx.studio, project, user: ctx.user });
 }

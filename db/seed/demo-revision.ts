@@ -2,7 +2,7 @@ import type { Database } from "@/db/client";
 import * as t from "@/db/schema";
 import { demoFinishes } from "./demo-finishes";
 import { demoId } from "./ids";
-import { canonicalJson, sha256Hex } from "@/lib/spec/canonical";
+import { hashRevision, serialiseRevision } from "@/lib/spec/revision-content";
 
 type Ctx = { studio: string; project: string; user: (key: string) => string };
 
@@ -45,11 +45,11 @@ export async function seedDemoRevision(db: Database, ctx: Ctx) {
       leadTimeDays: f.leadDays, orderByDate: orderBy(f.leadDays), cautions: [...(f.cautions ?? [])], sortOrder: i,
     };
   });
-  const content = canonicalJson({ letter: "A", projectId: ctx.project, lines });
+  const content = serialiseRevision({ letter: "A", projectId: ctx.project, lines });
   const revision = demoId("revision", "a");
   await db.insert(t.specRevisions).values({
     id: revision, projectId: ctx.project, letter: "A", sequence: 1, issuedAt: new Date("2026-11-19T00:30:00Z"),
-    issuedBy: ctx.user("designer"), content, sha256: sha256Hex(content),
+    issuedBy: ctx.user("designer"), content, sha256: hashRevision(content),
   }).onConflictDoNothing();
   await db.insert(t.specLines).values(lines.map((l, i) => ({ id: demoId("spec-line", `a-${i}`), revisionId: revision, ...l }))).onConflictDoNothing();
   await db.insert(t.supplierAcknowledgements).values({

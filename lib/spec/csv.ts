@@ -1,0 +1,79 @@
+import { stringify } from "csv-stringify/sync";
+import { cautionTitles } from "./caution-notes";
+import type { SpecLineContent } from "./types";
+
+export type CsvLine = SpecLineContent & { orderedOn?: string | null; expectedOn?: string | null };
+
+export const csvHeader = [
+  "Revision",
+  "Room",
+  "Item",
+  "Location",
+  "Finish",
+  "Product code",
+  "Supplier",
+  "Quantity",
+  "Unit",
+  "Lead time (days)",
+  "Order by",
+  "Cautions",
+  "Ordered on",
+  "Expected on",
+  "Line reference",
+] as const;
+
+/**
+ * A spreadsheet runs a cell that starts with = + - @ (or a tab or return) as a formula, so text
+ * cells starting with one get a leading apostrophe (OWASP, "CSV Injection"). Numbers stay numbers.
+ */
+export function neutraliseCell(value: string): string {
+  return /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
+}
+
+function text(value: string | null | undefined): string {
+  return value ? neutraliseCell(value) : "";
+}
+
+/**
+ * One revision's lines as CSV: UTF-8 with a byte-order mark (so spreadsheets pick the encoding
+ * and "m²" survives), a header row, CRLF line ends as RFC 4180 has them.
+ */
+export function specLinesCsv(letter: string, lines: readonly CsvLine[]): string {
+  const rows = [...lines]
+    .sort((a, b) => a.sortOrder - b.sortOrder)
+    .map((l) => [
+      letter,
+      text(l.room),
+      text(l.item),
+      text(l.location),
+      text(l.finishName),
+      text(l.productCode),
+      text(l.supplierName),
+      l.quantity,
+      text(l.unit),
+      l.leadTimeDays,
+      l.orderByDate ?? "",
+      text(cautionTitles(l.cautions).join("; ")),
+      l.orderedOn ?? "",
+      l.expectedOn ?? "",
+      l.lineKey,
+    ]);
+  return stringify([[...csvHeader], ...rows], { bom: true, record_delimiter: "windows" });
+}
+
+function slug(value: string): string {
+  const s = value
+    .normalize("NFKD")
+    .replace(/[\u0300-\u036f]/g, "")
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, "-")
+    .replace(/^-+|-+$/g, "")
+    .slice(0, 60);
+  return s || "project";
+}
+
+/** A file name any system accepts: ASCII letters, digits and hyphens, e.g. "marrow-street-terrace-revision-b.csv". */
+export function csvFileName(projectName: string, letter: string, supplierName?: string | null): string {
+  const parts = [slug(projectName), `revision-${letter.toLowerCase()}`, ...(supplierName ? [slug(supplierName)] : [])];
+  return `${parts.join("-")}.csv`;
+}
