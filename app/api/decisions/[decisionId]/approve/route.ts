@@ -1,0 +1,24 @@
+import { NextResponse } from "next/server";
+import { approveDecision } from "@/db/queries/decision-choices";
+import { getDecisionView } from "@/db/queries/decision-view";
+import { requireApiUser } from "@/lib/auth/session";
+import { notifyClientChose } from "@/lib/decisions/notify";
+import { readJson, route } from "@/lib/http";
+import { approveSchema } from "@/lib/validation/decision";
+
+type Context = { params: Promise<{ decisionId: string }> };
+
+/** The client approves one option with `confirm: true`; the decision locks. 409 if it already is. */
+export const POST = route(async (request, { params }: Context) => {
+  const actor = await requireApiUser();
+  const { decisionId } = await params;
+  const input = approveSchema.parse(await readJson(request));
+  const { decision, project, option } = await approveDecision(actor, decisionId, input);
+  await notifyClientChose(
+    project,
+    decision,
+    { clientName: actor.name ?? actor.email, optionLabel: option.label, approved: true },
+    request.headers.get("origin") ?? undefined,
+  );
+  return NextResponse.json(await getDecisionView(actor, decisionId));
+});

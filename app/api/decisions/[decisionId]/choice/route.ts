@@ -1,0 +1,24 @@
+import { NextResponse } from "next/server";
+import { chooseOption } from "@/db/queries/decision-choices";
+import { getDecisionView } from "@/db/queries/decision-view";
+import { requireApiUser } from "@/lib/auth/session";
+import { notifyClientChose } from "@/lib/decisions/notify";
+import { readJson, route } from "@/lib/http";
+import { choiceSchema } from "@/lib/validation/decision";
+
+type Context = { params: Promise<{ decisionId: string }> };
+
+/** The client picks an option (or changes their mind, with an optional comment). Not an approval. */
+export const POST = route(async (request, { params }: Context) => {
+  const actor = await requireApiUser();
+  const { decisionId } = await params;
+  const input = choiceSchema.parse(await readJson(request));
+  const { decision, project, option } = await chooseOption(actor, decisionId, input);
+  await notifyClientChose(
+    project,
+    decision,
+    { clientName: actor.name ?? actor.email, optionLabel: option.label, approved: false },
+    request.headers.get("origin") ?? undefined,
+  );
+  return NextResponse.json(await getDecisionView(actor, decisionId));
+});

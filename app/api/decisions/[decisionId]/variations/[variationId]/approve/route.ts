@@ -1,0 +1,18 @@
+import { NextResponse } from "next/server";
+import { approveVariation } from "@/db/queries/variations";
+import { requireApiUser } from "@/lib/auth/session";
+import { notifyVariation } from "@/lib/decisions/notify";
+import { readJson, route } from "@/lib/http";
+import { variationApproveSchema } from "@/lib/validation/decision";
+
+type Context = { params: Promise<{ decisionId: string; variationId: string }> };
+
+/** The client approves a priced variation with `confirm: true`; the decision then carries its option. */
+export const POST = route(async (request, { params }: Context) => {
+  const actor = await requireApiUser();
+  const { decisionId, variationId } = await params;
+  const input = variationApproveSchema.parse(await readJson(request));
+  const { project, decision, variation } = await approveVariation(actor, decisionId, variationId, input);
+  await notifyVariation(project, decision, variation.id, "approved", "staff", request.headers.get("origin") ?? undefined);
+  return NextResponse.json({ variation });
+});

@@ -1,0 +1,21 @@
+import { NextResponse } from "next/server";
+import { requestVariation } from "@/db/queries/variations";
+import { requireApiUser } from "@/lib/auth/session";
+import { notifyVariation } from "@/lib/decisions/notify";
+import { readJson, route } from "@/lib/http";
+import { variationRequestSchema } from "@/lib/validation/decision";
+
+type Context = { params: Promise<{ decisionId: string }> };
+
+/** A client or a designer asks for a change to a locked decision, with a reason. */
+export const POST = route(async (request, { params }: Context) => {
+  const actor = await requireApiUser();
+  const { decisionId } = await params;
+  const input = variationRequestSchema.parse(await readJson(request));
+  const { project, decision, variation, role } = await requestVariation(actor, decisionId, input);
+  // The designers price it; when a designer asked, the clients hear of it too.
+  const origin = request.headers.get("origin") ?? undefined;
+  await notifyVariation(project, decision, variation.id, "requested", "staff", origin);
+  if (role === "staff") await notifyVariation(project, decision, variation.id, "requested", "clients", origin);
+  return NextResponse.json({ variation }, { status: 201 });
+});

@@ -1,0 +1,62 @@
+import { and, eq, inArray } from "drizzle-orm";
+import { boards, finishes, optionLines, options, rooms } from "@/db/schema";
+import type { OptionInput } from "@/lib/validation/decision";
+import { HttpError, type FieldErrors } from "@/lib/http";
+import type { Tx } from "./serial-write";
+
+type NewOption = Omit<OptionInput, "id">;
+
+export const LOCKED_MESSAGE = "This decision is approved and locked. Changes now go through a variation.";
+export const STALE_MESSAGE = "This decision changed since you opened it. Look at it again, then try once more.";
+
+function badInput(fieldErrors: FieldErrors): HttpError {
+  return new HttpError(400, "Some fields need attention.", fieldErrors);
+}
+
+/** `room` may be the room's id or its name (an API caller may only know "Kitchen"). */
+export async function resolveRoom(tx: Tx, projectId: string, room: string): Promise<string> {
+  const list = await tx.select({ id: rooms.id, name: rooms.name }).from(rooms).where(eq(rooms.projectId, projectId));
+  const found = list.find((r) => r.id === room) ?? list.find((r) => r.name.toLowerCase() === room.trim().toLowerCase());
+  if (!found) throw badInput({ room: ["Choose one of this project's rooms."] });
+  return found.id;
+}
+
+/**
+ * Every finish must be in the project's studio library and every board on this project; anything
+ * else is refused field by field, before a row is written. `prefix` names where the options sit
+ * in the request body ("options" or "newOption").
+ */
+export async function checkOptionInputs(tx: Tx, studioId: string, projectId: string, list: NewOption[], prefix: (i: number) => string) {
+  const finishIds = [...new Set(list.flatMap((o) => o.lines.map((l) => l.finishId)))];
+  const boardIds = [...new Set(list.map((o) => o.boardId).filter((b): b is string => Boolean(b)))];
+  const [okFinishes, okBoards] = await Promise.all([
+    finishIds.length ? tx.select({ id: finishes.id }).from(finishes).where(and(inArray(finishes.id, finishIds), eq(finishes.studioId, studioId))) : [],
+    boardIds.length ? tx.select({ id: boards.id }).from(boards).where(and(inArray(boards.id, boardIds), eq(boards.projectId, projectId))) : [],
+  ]);
+  const finishOk = new Set(okFinishes.map((f) => f.id));
+  const boardOk = new Set(okBoards.map((b) => b.id));
+  const errors: FieldErrors = {};
+  list.forEach((o, i) => {
+    if (o.boardId && !boardOk.has(o.boardId)) errors[`${prefix(i)}.boardId`] = ["Choose one of this project's sample boards."];
+    o.lines.forEach((l, j) => {
+      if (!finishOk.has(l.finishId)) errors[`${prefix(i)}.lines.${j}.finishId`] = ["Choose a finish from your studio's library."];
+    });
+  });
+  if (Object.keys(errors).length) throw badInput(errors);
+}
+
+export async function insertOption(tx: Tx, decisionId: string, o: NewOption, sortOrder: number, addedByVariation = false) {
+  const [row] = await tx
+    .insert(options)
+    .values({ decisionId, label: o.label, priceCents: o.priceCents, notes: o.notes, boardId: o.boardId, sortOrder, addedByVariation })
+    .returning();
+  if (!row) throw new Error("option insert returned nothing");
+  await insertLines(tx, row.id, o.lines);
+  return row;
+}
+
+export async function insertLines(tx: Tx, optionId: string, lines: NewOption["lines"]) {
+  await tx.insert(optionLines).values(
+    lines.map((l, j) => ({ optionId, finishId: l.finishId, quantity: l.quantity, unit: l.unit, location: l.location, sortOrder: j })),
+  );
+}

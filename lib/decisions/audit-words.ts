@@ -1,0 +1,36 @@
+/** The project's activity log in plain words. Unknown actions (other areas add their own) fall back to their name. */
+
+type Detail = Record<string, unknown> | null | undefined;
+
+const text = (detail: Detail, key: string): string | null => {
+  const v = detail?.[key];
+  return typeof v === "string" && v.trim() ? v : null;
+};
+
+const quoted = (detail: Detail, key: string) => {
+  const v = text(detail, key);
+  return v ? ` “${v}”` : "";
+};
+
+const phrases: Record<string, (d: Detail) => string> = {
+  "project.created": () => "created the project",
+  "client.invited": (d) => `invited a client${text(d, "email") ? ` (${text(d, "email")})` : ""}`,
+  "supplier.invited": (d) => `invited a supplier's contact${text(d, "email") ? ` (${text(d, "email")})` : ""}`,
+  "decision.created": (d) => `opened the decision${quoted(d, "title")}`,
+  "decision.updated": (d) => `changed the decision${quoted(d, "title")}`,
+  "decision.sent": (d) => `sent the decision${quoted(d, "title")} to the clients`,
+  "option.chosen": (d) => `picked${quoted(d, "option")} for${quoted(d, "title")}${text(d, "comment") ? `, saying “${text(d, "comment")}”` : ""}`,
+  "decision.approved": (d) => `approved${quoted(d, "option")} for${quoted(d, "title")}, which locked it`,
+  "variation.requested": (d) => `asked for a variation to${quoted(d, "title")}${quoted(d, "reason") ? `:${quoted(d, "reason")}` : ""}`,
+  "variation.priced": (d) => `priced a variation to${quoted(d, "title")}`,
+  "variation.approved": (d) => `approved a variation to${quoted(d, "title")}${quoted(d, "option") ? `, which now carries${quoted(d, "option")}` : ""}`,
+  "variation.declined": (d) => `declined a variation to${quoted(d, "title")}`,
+  "variation.withdrawn": (d) => `withdrew a variation to${quoted(d, "title")}`,
+};
+
+export function describeAudit(action: string, detail: Detail): string {
+  const phrase = phrases[action];
+  if (phrase) return phrase(detail);
+  const words = action.replace(/[._-]+/g, " ").trim();
+  return words ? `${words}${quoted(detail, "title")}` : "did something";
+}
