@@ -35,6 +35,7 @@ export async function seedDemo(db: Database) {
     { id: user("other"), email: "other@demo.example", name: "Bea Strand", passwordHash },
     { id: user("client"), email: "client@demo.example", name: "Noor Haddad" },
     { id: user("client2"), email: "client2@demo.example", name: "Callum Haddad" },
+    { id: user("otherclient"), email: "otherclient@demo.example", name: "Wren Alcott" },
     ...supplierRows.map((s) => ({ id: user(s.key), email: `${s.key}@demo.example`, name: `${s.name} orders desk` })),
   ]).onConflictDoNothing();
   await db.insert(t.studioMembers).values([
@@ -78,6 +79,8 @@ export async function seedDemo(db: Database) {
   }).onConflictDoNothing();
   await db.insert(t.projects).values({ id: demoId("project", "quarry"), studioId: other, name: "Quarry Lane cottage", installDate: "2027-06-01" }).onConflictDoNothing();
   await db.insert(t.rooms).values({ id: demoId("room", "quarry-kitchen"), projectId: demoId("project", "quarry"), name: "Kitchen" }).onConflictDoNothing();
+  // A client of another studio's project: isolation between clients can be seen and tested.
+  await db.insert(t.projectMembers).values({ id: demoId("member", "otherclient"), projectId: demoId("project", "quarry"), userId: user("otherclient"), role: "client" }).onConflictDoNothing();
 
   await seedDemoProject(db, { studio, user, supplierKeys: supplierRows.map((s) => s.key) });
 }

@@ -1,0 +1,61 @@
+import autocannon from "autocannon";
+import { gzipSync } from "node:zlib";
+import type { BenchRow } from "./table";
+
+type Load = { rps: number; p99: number; errors: number };
+
+/** One autocannon run: requests per second, p99 latency, and everything that wasn't a 2xx. */
+export async function measureLoad(
+  url: string,
+  connections: number,
+  options: { cookie?: string; method?: "GET" | "POST"; body?: string; seconds?: number } = {},
+): Promise<Load> {
+  const result = await autocannon({
+    url,
+    connections,
+    duration: options.seconds ?? 8,
+    method: options.method ?? "GET",
+    headers: {
+      ...(options.cookie ? { cookie: options.cookie } : {}),
+      ...(options.body ? { "content-type": "application/json" } : {}),
+    },
+    body: options.body,
+  });
+  return { rps: result.requests.average, p99: result.latency.p99, errors: result.errors + result.timeouts + result.non2xx };
+}
+
+const fmt = (n: number, digits = 0) => n.toFixed(digits);
+
+export function rowsForEndpoint(name: string, at50: Load, at10: Load, base50: Load): BenchRow[] {
+  const ratio = at50.rps / base50.rps;
+  return [
+    {
+      measure: `${name}: req/s at 50 connections (errors)`,
+      ours: `${fmt(at50.rps)} (${at50.errors})`,
+      baseline: `${fmt(base50.rps)} (${base50.errors})`,
+      ratio: `${fmt(ratio, 2)}×`,
+      target: "≥ 0.5× baseline, 0 errors",
+      met: ratio >= 0.5 && at50.errors === 0 ? "yes" : "no",
+    },
+    {
+      measure: `${name}: p99 at 10 connections`,
+      ours: `${fmt(at10.p99)} ms`,
+      baseline: "–",
+      ratio: "–",
+      target: "≤ 50 ms",
+      met: at10.p99 <= 50 && at10.errors === 0 ? "yes" : "no",
+    },
+  ];
+}
+
+/** First-load JavaScript of a page: the gzip size of every script its HTML loads. */
+export async function measurePageJs(base: string, path: string, cookie?: string): Promise<number> {
+  const html = await (await fetch(base + path, { headers: cookie ? { cookie } : {} })).text();
+  const sources = [...html.matchAll(/<script[^>]+src="([^"]+)"/g)].map((m) => m[1] ?? "");
+  let bytes = 0;
+  for (const src of new Set(sources)) {
+    const body = Buffer.from(await (await fetch(new URL(src, base))).arrayBuffer());
+    bytes += gzipSync(body).length;
+  }
+  return bytes;
+}

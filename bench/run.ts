@@ -1,0 +1,69 @@
+import { existsSync, mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
+import { migrateDatabase } from "../db/migrate";
+import { seedBenchStudio } from "../db/seed/bench-studio";
+import { run } from "../scripts/lib/processes";
+import { measureLoad, measurePageJs, rowsForEndpoint } from "./api";
+import { runColourBench } from "./colour";
+import { residentMemoryMiB, sessionCookie, startBenchServer } from "./server";
+import { printTable, type BenchRow } from "./table";
+
+/**
+ * `npm run bench`: every benchmark against the production build, one table: our figure, a
+ * baseline measured in the same run, the ratio and the target. Never part of `npm test`.
+ */
+const rows: BenchRow[] = [];
+rows.push(...(await runColourBench()));
+if (existsSync("bench/uploads.ts")) {
+  const uploads = (await import("./uploads" as string)) as { runUploadsBench: () => Promise<BenchRow[]> };
+  rows.push(...(await uploads.runUploadsBench()));
+}
+
+const dir = mkdtempSync(path.join(tmpdir(), "mottle-bench-"));
+const databaseUrl = `file:${path.join(dir, "bench.db")}`;
+const { client, db } = await migrateDatabase(databaseUrl);
+await seedBenchStudio(db);
+client.close();
+
+const distDir = ".next-bench";
+console.log("Building the production app for the benchmark…");
+await run("npx", ["next", "build"], { ...process.env, NEXT_DIST_DIR: distDir, NEXT_TELEMETRY_DISABLED: "1" });
+const { base, child } = await startBenchServer(distDir, databaseUrl, path.join(dir, "uploads"));
+try {
+  const designer = await sessionCookie("bench-user-designer", "designer@bench.example");
+  const clientCookie = await sessionCookie("bench-user-client", "client@bench.example");
+  const warm = (url: string, cookie: string) => measureLoad(url, 10, { cookie, seconds: 2 });
+  await warm(`${base}/api/health`, designer);
+
+  const baseline50 = await measureLoad(`${base}/api/health`, 50);
+  const baseline10 = await measureLoad(`${base}/api/health`, 10);
+  rows.push({ measure: "baseline /api/health: req/s at 50, p99 at 10", ours: `${baseline50.rps.toFixed(0)} req/s`, baseline: "–", ratio: "–", target: "–", met: "–" });
+  rows.push({ measure: "baseline /api/health: p99 at 10 connections", ours: `${baseline10.p99} ms`, baseline: "–", ratio: "–", target: "–", met: "–" });
+
+  const endpoints: [string, string, string, { method?: "POST"; body?: string }][] = [
+    ["GET board with checks", `${base}/api/boards/bench-board-0`, designer, {}],
+    ["GET finish table page 1, filtered", `${base}/api/finishes?category=stone&page=1`, designer, {}],
+    ["POST client choice", `${base}/api/decisions/bench-decision-0-0/choice`, clientCookie, { method: "POST", body: JSON.stringify({ optionId: "bench-option-0-0-1" }) }],
+  ];
+  for (const [name, url, cookie, extra] of endpoints) {
+    await warm(url, cookie);
+    const at50 = await measureLoad(url, 50, { cookie, ...extra });
+    const at10 = await measureLoad(url, 10, { cookie, ...extra });
+    rows.push(...rowsForEndpoint(name, at50, at10, baseline50));
+  }
+
+  const bare = await measurePageJs(base, "/sign-in/check-email");
+  const decisionPage = await measurePageJs(base, "/client/decisions/bench-decision-0-0", clientCookie);
+  const extra = (decisionPage - bare) / 1024;
+  rows.push({
+    measure: "client decision page: first-load JS more than a bare page (gzip)",
+    ours: `${(decisionPage / 1024).toFixed(1)} kB`, baseline: `${(bare / 1024).toFixed(1)} kB`, ratio: `+${extra.toFixed(1)} kB`,
+    target: "≤ +60 kB", met: extra <= 60 ? "yes" : "no",
+  });
+  rows.push({ measure: "server resident memory after the load run", ours: `${residentMemoryMiB(child.pid ?? 0).toFixed(0)} MiB`, baseline: "–", ratio: "–", target: "reported", met: "–" });
+} finally {
+  child.kill("SIGTERM");
+  rmSync(dir, { recursive: true, force: true });
+}
+printTable(rows);
