@@ -3,7 +3,7 @@ export const sessionStub: { current: { user: { id: string }; expires: string } |
 
 export const demoUserId = (key: string) => `demo-user-${key}`;
 
-export type Persona = "owner" | "designer" | "other" | "client" | "client2" | "stone" | "joinery" | "anonymous";
+export type Persona = "owner" | "designer" | "other" | "client" | "client2" | "otherclient" | "stone" | "joinery" | "anonymous";
 
 export function actAs(persona: Persona) {
   sessionStub.current =
