@@ -1,0 +1,38 @@
+import { NextResponse } from "next/server";
+import { importFinishesCsv } from "@/db/queries/finish-csv";
+import { requireApiUser } from "@/lib/auth/session";
+import { HttpError, route } from "@/lib/http";
+
+const MAX_CSV_BYTES = 5 * 1024 * 1024;
+
+/** The CSV as multipart (field `file`) or as a text/csv body. */
+async function readCsvText(request: Request): Promise<string> {
+  const length = Number(request.headers.get("content-length") ?? NaN);
+  if (Number.isFinite(length) && length > MAX_CSV_BYTES) throw new HttpError(413, "That file is larger than 5 MB. Split it and import the parts one by one.");
+  const type = request.headers.get("content-type") ?? "";
+  let text: string;
+  if (type.startsWith("multipart/form-data")) {
+    const file = (await request.formData().catch(() => null))?.get("file");
+    if (!file || typeof file === "string") throw new HttpError(400, "Choose a CSV file to import.", { file: ["Choose a CSV file to import."] });
+    text = await file.text();
+  } else {
+    text = await request.text();
+  }
+  if (text.length > MAX_CSV_BYTES) throw new HttpError(413, "That file is larger than 5 MB. Split it and import the parts one by one.");
+  return text;
+}
+
+/**
+ * `?dryRun=1` reports every row that would be rejected and why, writing nothing. Without it the
+ * rows are imported in one transaction, or, if any row is bad, none are (400 with the list).
+ */
+export const POST = route(async (request) => {
+  const actor = await requireApiUser("designer");
+  const dryRun = ["1", "true", "yes"].includes(new URL(request.url).searchParams.get("dryRun") ?? "");
+  const report = await importFinishesCsv(actor, await readCsvText(request), dryRun);
+  if (!dryRun && report.rejected.length > 0) {
+    const rows = report.rejected.length === 1 ? "1 row needs" : `${report.rejected.length} rows need`;
+    return NextResponse.json({ error: `${rows} fixing, so nothing was imported.`, ...report }, { status: 400 });
+  }
+  return NextResponse.json(report, { status: dryRun || report.imported === 0 ? 200 : 201 });
+});

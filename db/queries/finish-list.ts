@@ -1,0 +1,67 @@
+import { and, asc, eq, getTableColumns, isNotNull, isNull, or, sql, type AnyColumn, type SQL } from "drizzle-orm";
+import { db } from "@/db";
+import { finishes, suppliers } from "@/db/schema";
+import type { FinishListQuery, FinishSortKey } from "@/lib/validation/finish";
+import { toFinishSummary, type FinishPage } from "./finish-dto";
+
+/** LIKE pattern for text typed by a person: % and _ are literal, matched anywhere, any case (ASCII). */
+function containing(text: string): string {
+  return `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+}
+
+function matchesText(q: string): SQL | undefined {
+  if (!q) return undefined;
+  const pattern = containing(q);
+  const like = (column: AnyColumn) => sql`${column} like ${pattern} escape '\\'`;
+  return or(like(finishes.name), like(finishes.productCode), like(finishes.surface), like(suppliers.name));
+}
+
+const sortColumns: Record<FinishSortKey, SQL> = {
+  name: sql`${finishes.name} collate nocase`,
+  category: sql`${finishes.category}`,
+  supplier: sql`${suppliers.name} collate nocase`,
+  code: sql`${finishes.productCode} collate nocase`,
+  surface: sql`${finishes.surface} collate nocase`,
+  price: sql`${finishes.unitPriceCents}`,
+  lead: sql`${finishes.leadTimeDays}`,
+  lrv: sql`${finishes.lrv}`,
+  updated: sql`${finishes.updatedAt}`,
+};
+
+function orderFor(sort: FinishSortKey, dir: "asc" | "desc"): SQL[] {
+  const column = sortColumns[sort];
+  // Blanks (no supplier, no code) sort last either way; name then id keep pages stable.
+  const primary = dir === "asc" ? sql`${column} asc nulls last` : sql`${column} desc nulls last`;
+  return [primary, asc(sortColumns.name), asc(finishes.id)];
+}
+
+/**
+ * One page of a studio's library. Filters use finish_studio_idx (studio, category); at 10,000
+ * finishes the text match and the sort over one studio's rows stay in the low milliseconds.
+ */
+export async function listFinishes(studioId: string, query: FinishListQuery): Promise<FinishPage> {
+  const where = and(
+    eq(finishes.studioId, studioId),
+    query.status === "current" ? isNull(finishes.archivedAt) : query.status === "archived" ? isNotNull(finishes.archivedAt) : undefined,
+    query.category ? eq(finishes.category, query.category) : undefined,
+    query.supplier === "none" ? isNull(finishes.supplierId) : query.supplier ? eq(finishes.supplierId, query.supplier) : undefined,
+    matchesText(query.q),
+  );
+  const offset = (query.page - 1) * query.pageSize;
+  const [rows, [count]] = await Promise.all([
+    db
+      .select({ ...getTableColumns(finishes), supplierName: suppliers.name })
+      .from(finishes)
+      .leftJoin(suppliers, eq(suppliers.id, finishes.supplierId))
+      .where(where)
+      .orderBy(...orderFor(query.sort, query.dir))
+      .limit(query.pageSize)
+      .offset(offset),
+    db
+      .select({ total: sql<number>`count(*)` })
+      .from(finishes)
+      .leftJoin(suppliers, eq(suppliers.id, finishes.supplierId))
+      .where(where),
+  ]);
+  return { items: rows.map(toFinishSummary), total: Number(count?.total ?? 0), page: query.page, pageSize: query.pageSize };
+}

@@ -1,0 +1,68 @@
+import { and, eq, getTableColumns, inArray, isNull, sql } from "drizzle-orm";
+import { db } from "@/db";
+import { finishes, suppliers } from "@/db/schema";
+import { createColourIndex, type ColourIndex } from "@/lib/colour";
+import { notFound } from "@/lib/http";
+import { toFinishSummary, type FinishSummary } from "./finish-dto";
+import { requireStudioId } from "./finishes";
+import type { Actor } from "./users";
+
+type CachedIndex = { version: string; index: ColourIndex };
+
+// One ΔE00 index per studio, rebuilt only when its current finishes change. The version is cheap
+// (one aggregate over the studio's rows): an insert, edit, archive or restore moves the newest
+// updated_at and the sum, a delete the count and the sum.
+const indexes = new Map<string, CachedIndex>();
+
+async function readVersion(studioId: string): Promise<string> {
+  const [row] = await db
+    .select({
+      n: sql<number>`count(*)`,
+      newest: sql<number | null>`max(${finishes.updatedAt})`,
+      sum: sql<number>`total(${finishes.updatedAt})`,
+    })
+    .from(finishes)
+    .where(and(eq(finishes.studioId, studioId), isNull(finishes.archivedAt)));
+  return `${row?.n ?? 0}:${row?.newest ?? 0}:${row?.sum ?? 0}`;
+}
+
+/** The studio's current (not archived) finishes as a colour index, from the cache when it is still right. */
+export async function getColourIndex(studioId: string): Promise<ColourIndex> {
+  const version = await readVersion(studioId);
+  const cached = indexes.get(studioId);
+  if (cached?.version === version) return cached.index;
+  const rows = await db
+    .select({ id: finishes.id, labL: finishes.labL, labA: finishes.labA, labB: finishes.labB })
+    .from(finishes)
+    .where(and(eq(finishes.studioId, studioId), isNull(finishes.archivedAt)));
+  const index = createColourIndex(rows.map((r) => ({ id: r.id, lab: [r.labL, r.labA, r.labB] as const })));
+  indexes.set(studioId, { version, index });
+  return index;
+}
+
+export type SimilarFinish = FinishSummary & { deltaE: number };
+
+/** Current finishes within maxDeltaE (CIEDE2000) of this one, nearest first, itself left out. */
+export async function listSimilarFinishes(actor: Actor, finishId: string, maxDeltaE: number, limit: number): Promise<SimilarFinish[]> {
+  const studioId = requireStudioId(actor);
+  const target = await db.query.finishes.findFirst({ where: and(eq(finishes.id, finishId), eq(finishes.studioId, studioId)) });
+  if (!target) throw notFound("That finish");
+  const index = await getColourIndex(studioId);
+  const hits = index.within([target.labL, target.labA, target.labB], maxDeltaE).filter((h) => h.id !== finishId).slice(0, limit);
+  if (hits.length === 0) return [];
+  const rows = await db
+    .select({ ...getTableColumns(finishes), supplierName: suppliers.name })
+    .from(finishes)
+    .leftJoin(suppliers, eq(suppliers.id, finishes.supplierId))
+    .where(inArray(finishes.id, hits.map((h) => h.id)));
+  const byId = new Map(rows.map((r) => [r.id, r]));
+  return hits.flatMap((h) => {
+    const row = byId.get(h.id);
+    return row ? [{ ...toFinishSummary(row), deltaE: Math.round(h.deltaE * 100) / 100 }] : [];
+  });
+}
+
+/** For tests: forget every cached index. */
+export function clearColourIndexCache(): void {
+  indexes.clear();
+}
