@@ -20,6 +20,8 @@ const env: NodeJS.ProcessEnv = {
   UPLOADS_DIR: path.join(dir, "uploads"),
   SMTP_URL: `smtp://127.0.0.1:${catcherPort}`,
   AUTH_TRUST_HOST: "true",
+  // Known to the tests, so the permission matrix can sign its own session cookies.
+  AUTH_SECRET: "e2e-secret-e2e-secret-e2e-secret-e2e-secret",
   E2E_BASE_URL: `http://127.0.0.1:${port}`,
   E2E_CATCHER_PORT: String(catcherPort),
 };
