@@ -37,6 +37,19 @@ export type FinishDetail = FinishSummary & {
 
 export type FinishPage = { items: FinishSummary[]; total: number; page: number; pageSize: number };
 
+// Gamut-mapping a colour outside sRGB costs ~0.5 ms; a library repeats the same colours on every page.
+const hexes = new Map<string, string>();
+function hexFor(lab: [number, number, number]): string {
+  const key = lab.join(",");
+  let hex = hexes.get(key);
+  if (hex === undefined) {
+    if (hexes.size > 50_000) hexes.clear();
+    hex = toHex(lab);
+    hexes.set(key, hex);
+  }
+  return hex;
+}
+
 export function toFinishSummary(row: Finish & { supplierName: string | null }): FinishSummary {
   const lab: [number, number, number] = [row.labL, row.labA, row.labB];
   return {
@@ -53,7 +66,7 @@ export function toFinishSummary(row: Finish & { supplierName: string | null }): 
     leadTimeDays: row.leadTimeDays,
     cautions: row.cautions,
     lab,
-    hex: toHex(lab),
+    hex: hexFor(lab),
     colourSource: row.colourSource,
     lrv: row.lrv,
     lrvSource: row.lrvSource,

@@ -1,4 +1,4 @@
-import { and, asc, eq, getTableColumns, isNotNull, isNull, or, sql, type AnyColumn, type SQL } from "drizzle-orm";
+import { and, asc, eq, getTableColumns, inArray, isNotNull, isNull, or, sql, type AnyColumn, type SQL } from "drizzle-orm";
 import { db } from "@/db";
 import { finishes, suppliers } from "@/db/schema";
 import type { FinishListQuery, FinishSortKey } from "@/lib/validation/finish";
@@ -36,8 +36,9 @@ function orderFor(sort: FinishSortKey, dir: "asc" | "desc"): SQL[] {
 }
 
 /**
- * One page of a studio's library. Filters use finish_studio_idx (studio, category); at 10,000
- * finishes the text match and the sort over one studio's rows stay in the low milliseconds.
+ * One page of a studio's library. Sorting 10,000 whole rows is what costs, so the sort runs over
+ * ids and sort keys only (the studio filter uses its index), and just the page's rows are read
+ * in full afterwards; the count runs beside it.
  */
 export async function listFinishes(studioId: string, query: FinishListQuery): Promise<FinishPage> {
   const where = and(
@@ -47,21 +48,30 @@ export async function listFinishes(studioId: string, query: FinishListQuery): Pr
     query.supplier === "none" ? isNull(finishes.supplierId) : query.supplier ? eq(finishes.supplierId, query.supplier) : undefined,
     matchesText(query.q),
   );
-  const offset = (query.page - 1) * query.pageSize;
-  const [rows, [count]] = await Promise.all([
-    db
-      .select({ ...getTableColumns(finishes), supplierName: suppliers.name })
-      .from(finishes)
-      .leftJoin(suppliers, eq(suppliers.id, finishes.supplierId))
+  // The supplier's name is only needed to match text or to sort by it.
+  const needsSupplier = Boolean(query.q) || query.sort === "supplier";
+  const ids = db.select({ id: finishes.id }).from(finishes);
+  const counted = db.select({ total: sql<number>`count(*)` }).from(finishes);
+  const join = eq(suppliers.id, finishes.supplierId);
+  const [pageIds, [count]] = await Promise.all([
+    (needsSupplier ? ids.leftJoin(suppliers, join) : ids)
       .where(where)
       .orderBy(...orderFor(query.sort, query.dir))
       .limit(query.pageSize)
-      .offset(offset),
-    db
-      .select({ total: sql<number>`count(*)` })
-      .from(finishes)
-      .leftJoin(suppliers, eq(suppliers.id, finishes.supplierId))
-      .where(where),
+      .offset((query.page - 1) * query.pageSize),
+    (query.q ? counted.leftJoin(suppliers, join) : counted).where(where),
   ]);
-  return { items: rows.map(toFinishSummary), total: Number(count?.total ?? 0), page: query.page, pageSize: query.pageSize };
+  const rows = pageIds.length
+    ? await db
+        .select({ ...getTableColumns(finishes), supplierName: suppliers.name })
+        .from(finishes)
+        .leftJoin(suppliers, join)
+        .where(inArray(finishes.id, pageIds.map((r) => r.id)))
+    : [];
+  const byId = new Map(rows.map((r) => [r.id, r]));
+  const items = pageIds.flatMap(({ id }) => {
+    const row = byId.get(id);
+    return row ? [toFinishSummary(row)] : [];
+  });
+  return { items, total: Number(count?.total ?? 0), page: query.page, pageSize: query.pageSize };
 }
