@@ -1,4 +1,4 @@
-import "server-only";
+// Server-only by nature (node:fs); no "server-only" import so the bench can run it under plain tsx.
 import { randomUUID } from "node:crypto";
 import { mkdir, readFile, unlink, writeFile } from "node:fs/promises";
 import path from "node:path";
