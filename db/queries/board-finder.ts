@@ -2,6 +2,7 @@ import { and, asc, eq, isNull, like, or, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { finishes, images, suppliers } from "@/db/schema";
 import { thumbnailUrl } from "@/lib/boards/thumbnails";
+import type { FinderHit } from "@/lib/boards/types";
 import { createColourIndex, toHex } from "@/lib/colour";
 import type { Lab } from "@/lib/colour";
 import { HttpError } from "@/lib/http";
@@ -13,20 +14,6 @@ export const FINDER_LIMIT = 40;
 /** How many neighbours "similar colours" lists. */
 export const SIMILAR_LIMIT = 12;
 
-export type FinderHit = {
-  id: string;
-  name: string;
-  category: string;
-  productCode: string | null;
-  surface: string | null;
-  supplierName: string | null;
-  hex: string;
-  lrv: number;
-  lrvSource: "published" | "photo" | "computed";
-  imageUrl: string | null;
-  /** ΔE00 from the finish the designer asked for similar colours to. */
-  deltaE: number | null;
-};
 
 function escapeLike(text: string) {
   return text.replace(/[\\%_]/g, (c) => `\\${c}`);
@@ -37,7 +24,7 @@ function escapeLike(text: string) {
  * finishes by words in the name, code, surface or supplier, by category, or nearest in colour
  * (CIEDE2000) to one chosen finish.
  */
-export async function findFinishesForBoard(actor: Actor, boardId: string, query: FinderQuery): Promise<FinderHit[]> {
+export async function findFinishesForBoard(actor: Actor, boardId: string, query: FinderQuery): Promise<{ items: FinderHit[]; total: number }> {
   const { project } = await openBoard(actor, boardId, "edit");
   const words = query.q ? `%${escapeLike(query.q.toLowerCase())}%` : null;
   const rows = await db
@@ -92,7 +79,7 @@ export async function findFinishesForBoard(actor: Actor, boardId: string, query:
     };
   });
   const strip = ({ lab: _lab, ...hit }: FinderHit & { lab: Lab }): FinderHit => hit;
-  if (!query.near) return hits.slice(0, FINDER_LIMIT).map(strip);
+  if (!query.near) return { items: hits.slice(0, FINDER_LIMIT).map(strip), total: hits.length };
 
   const [target] = await db
     .select({ labL: finishes.labL, labA: finishes.labA, labB: finishes.labB })
@@ -102,9 +89,10 @@ export async function findFinishesForBoard(actor: Actor, boardId: string, query:
   if (!target) throw new HttpError(400, "Choose a finish from your studio's library to find similar colours.", { near: ["Choose a finish from your studio's library."] });
   const index = createColourIndex(hits.map((h) => ({ id: h.id, lab: h.lab })));
   const byId = new Map(hits.map((h) => [h.id, h]));
-  return index
+  const items = index
     .nearest([target.labL, target.labA, target.labB], SIMILAR_LIMIT + 1)
     .filter((hit) => hit.id !== query.near)
     .slice(0, SIMILAR_LIMIT)
     .map((hit) => ({ ...strip(byId.get(hit.id) as FinderHit & { lab: Lab }), deltaE: hit.deltaE }));
+  return { items, total: items.length };
 }

@@ -74,3 +74,19 @@ export type BoardList = {
   access: "edit" | "read";
   rooms: { id: string; name: string; boards: BoardSummary[] }[];
 };
+
+/** One finish the board's picker offers (GET /api/boards/:id/finishes). */
+export type FinderHit = {
+  id: string;
+  name: string;
+  category: string;
+  productCode: string | null;
+  surface: string | null;
+  supplierName: string | null;
+  hex: string;
+  lrv: number;
+  lrvSource: LrvSource;
+  imageUrl: string | null;
+  /** ΔE00 from the finish the designer asked for similar colours to. */
+  deltaE: number | null;
+};

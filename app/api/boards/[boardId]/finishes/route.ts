@@ -5,7 +5,7 @@ import { route } from "@/lib/http";
 import { finderQuerySchema } from "@/lib/validation/board";
 import type { BoardParams } from "../board-response";
 
-/** Finishes to place on this board: `?q=` words, `?category=`, `?near=<finishId>` for similar colours. */
+/** Finishes to place on this board: `?q=` words, `?category=`, `?near=<finishId>` for similar colours → `{ items, total }`. */
 export const GET = route(async (request: Request, { params }: BoardParams) => {
   const actor = await requireApiUser("designer");
   const { boardId } = await params;
@@ -15,5 +15,5 @@ export const GET = route(async (request: Request, { params }: BoardParams) => {
     category: search.get("category") || undefined,
     near: search.get("near") || undefined,
   });
-  return NextResponse.json({ items: await findFinishesForBoard(actor, boardId, query) });
+  return NextResponse.json(await findFinishesForBoard(actor, boardId, query));
 });

@@ -1,0 +1,54 @@
+import type { Metadata } from "next";
+import { listBoards } from "@/db/queries/boards";
+import { BoardSummaryCard } from "@/components/board/board-summary-card";
+import { NewBoardForm } from "@/components/board/new-board-form";
+import { Card, EmptyState, PageHeader, Section } from "@/components/ui";
+import { requireRole } from "@/lib/auth/session";
+import { pageGuard } from "@/lib/page-guard";
+import { createBoardAction } from "./actions";
+
+export const metadata: Metadata = { title: "Sample boards" };
+
+type Props = { params: Promise<{ projectId: string }> };
+
+export default async function BoardsPage({ params }: Props) {
+  const { projectId } = await params;
+  const actor = await requireRole("designer");
+  const list = await pageGuard(listBoards(actor, projectId));
+  const base = `/studio/projects/${list.project.id}/boards`;
+  const total = list.rooms.reduce((n, r) => n + r.boards.length, 0);
+  return (
+    <div className="flex flex-col gap-8">
+      <PageHeader
+        eyebrow={list.project.name}
+        title="Sample boards"
+        description="One board per idea for a room. Mark where finishes meet and each pair is checked in daylight and under warm or cool light."
+      />
+      <div className="grid items-start gap-8 lg:grid-cols-[minmax(0,1fr)_20rem]">
+        <div className="flex flex-col gap-10">
+          {total === 0 && <EmptyState title="No boards yet">Start a board for a room, then add finishes from the library.</EmptyState>}
+          {list.rooms.map((room) => (
+            <Section key={room.id} title={room.name} level={2}>
+              {room.boards.length === 0 ? (
+                <p className="text-ink-soft">No boards for this room yet.</p>
+              ) : (
+                <ul className="grid gap-4 sm:grid-cols-2">
+                  {room.boards.map((board) => (
+                    <BoardSummaryCard key={board.id} board={board} boardsPath={base} />
+                  ))}
+                </ul>
+              )}
+            </Section>
+          ))}
+        </div>
+        <Card title="Start a board">
+          {list.rooms.length === 0 ? (
+            <p className="text-ink-soft">Add a room to the project first.</p>
+          ) : (
+            <NewBoardForm rooms={list.rooms.map((r) => ({ id: r.id, name: r.name }))} action={createBoardAction.bind(null, list.project.id)} />
+          )}
+        </Card>
+      </div>
+    </div>
+  );
+}
