@@ -33,11 +33,15 @@ const { startMailCatcher } = await import("../lib/mail/catcher");
 const catcher = await startMailCatcher({ port: catcherPort, dir: env.MAIL_CATCHER_DIR ?? "" });
 const server = await startNext(port, env, true, "127.0.0.1");
 let failed = false;
+// The permission matrix first, on the freshly seeded database, then the flows that change it.
+const suites = [["tests/e2e/permission-matrix.test.ts"], ["--exclude", "tests/e2e/permission-matrix.test.ts"]];
 try {
-  await run("npx", ["vitest", "run", "--config", "vitest.e2e.config.ts"], env);
-} catch (error) {
-  failed = true;
-  console.error(error instanceof Error ? error.message : error);
+  for (const suite of suites) {
+    await run("npx", ["vitest", "run", "--config", "vitest.e2e.config.ts", ...suite], env).catch((error: unknown) => {
+      failed = true;
+      console.error(error instanceof Error ? error.message : error);
+    });
+  }
 } finally {
   server.kill("SIGTERM");
   await catcher.close();

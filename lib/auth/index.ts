@@ -31,6 +31,13 @@ export const { handlers, auth, signIn, signOut } = NextAuth({
   trustHost: true,
   // __Secure- cookies in production (behind HTTPS); plain cookies for the local demo on http.
   useSecureCookies: env.MOTTLE_MODE === "production",
+  // A wrong password is an everyday event, not a server error: keep it out of the error log.
+  logger: {
+    error(error) {
+      if (error.name === "CredentialsSignin" || error.name === "SignInThrottled") return;
+      console.error(error);
+    },
+  },
   pages: { signIn: "/sign-in", verifyRequest: "/sign-in/check-email", error: "/sign-in" },
   providers: [
     Credentials({

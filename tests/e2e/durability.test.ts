@@ -74,7 +74,9 @@ describe("durability", () => {
       },
     ];
     const streams = loops.map((loop) => loop());
-    await new Promise((r) => setTimeout(r, 1500));
+    // Kill once the writes are well under way (a busy machine is slower: wait for the count, not a clock).
+    const deadline = Date.now() + 60_000;
+    while (sent < 12 && Date.now() < deadline) await new Promise((r) => setTimeout(r, 50));
     server.kill("SIGKILL");
     running = false;
     await Promise.all(streams);
