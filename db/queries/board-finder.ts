@@ -1,7 +1,7 @@
 import { and, asc, eq, isNull, like, or, sql } from "drizzle-orm";
 import { db } from "@/db";
-import { finishes, images, suppliers } from "@/db/schema";
-import { thumbnailUrl } from "@/lib/boards/thumbnails";
+import { finishes, suppliers } from "@/db/schema";
+import { imageUrl } from "@/lib/uploads/urls";
 import type { FinderHit } from "@/lib/boards/types";
 import { createColourIndex, toHex } from "@/lib/colour";
 import type { Lab } from "@/lib/colour";
@@ -40,11 +40,10 @@ export async function findFinishesForBoard(actor: Actor, boardId: string, query:
       labB: finishes.labB,
       lrv: finishes.lrv,
       lrvSource: finishes.lrvSource,
-      storageKey: images.storageKey,
+      imageId: finishes.imageId,
     })
     .from(finishes)
     .leftJoin(suppliers, eq(suppliers.id, finishes.supplierId))
-    .leftJoin(images, eq(images.id, finishes.imageId))
     .where(
       and(
         eq(finishes.studioId, project.studioId),
@@ -73,7 +72,7 @@ export async function findFinishesForBoard(actor: Actor, boardId: string, query:
       hex: toHex(lab),
       lrv: row.lrv,
       lrvSource: row.lrvSource,
-      imageUrl: thumbnailUrl(row.storageKey),
+      imageUrl: row.imageId ? imageUrl(row.imageId, "400") : null,
       deltaE: null,
       lab,
     };

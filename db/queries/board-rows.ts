@@ -1,7 +1,7 @@
 import { asc, eq, inArray } from "drizzle-orm";
 import { db } from "@/db";
-import { adjacencies, boardItems, finishes, images } from "@/db/schema";
-import { thumbnailUrl } from "@/lib/boards/thumbnails";
+import { adjacencies, boardItems, finishes } from "@/db/schema";
+import { imageUrl } from "@/lib/uploads/urls";
 import type { ItemRow } from "@/lib/boards/view";
 import type { BoardPairView } from "@/lib/boards/types";
 
@@ -28,18 +28,18 @@ export async function readItemRows(boardIds: string[]): Promise<(ItemRow & { boa
       labB: finishes.labB,
       lrv: finishes.lrv,
       lrvSource: finishes.lrvSource,
-      storageKey: images.storageKey,
+      imageId: finishes.imageId,
       cautions: finishes.cautions,
       archivedAt: finishes.archivedAt,
     })
     .from(boardItems)
     .innerJoin(finishes, eq(finishes.id, boardItems.finishId))
-    .leftJoin(images, eq(images.id, finishes.imageId))
     .where(inArray(boardItems.boardId, boardIds))
     .orderBy(asc(boardItems.sortOrder), asc(boardItems.id));
-  return rows.map(({ storageKey, archivedAt, ...row }) => ({
+  return rows.map(({ imageId, archivedAt, ...row }) => ({
     ...row,
-    imageUrl: thumbnailUrl(storageKey),
+    // The library's authenticated photo route; clients may see photos of finishes on their boards.
+    imageUrl: imageId ? imageUrl(imageId, "400") : null,
     archived: archivedAt !== null,
   }));
 }
