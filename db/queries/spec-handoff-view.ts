@@ -27,7 +27,8 @@ async function readProjectAcks(projectId: string): Promise<Ack[]> {
     .where(eq(specRevisions.projectId, projectId));
 }
 
-async function readContacts(projectId: string) {
+/** The project's supplier contacts: who gets the e-mail when a revision is issued. */
+export async function readContacts(projectId: string) {
   return db
     .select({ supplierId: projectMembers.supplierId, email: users.email, name: users.name })
     .from(projectMembers)

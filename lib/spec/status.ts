@@ -23,7 +23,7 @@ export const lineStatusLabels: Record<LineStatus, string> = {
   "not-ordered": "Not ordered yet",
   "order-overdue": "Not ordered, order-by date passed",
   ordered: "Ordered",
-  expected: "Ordered, delivery date set",
+  expected: "Delivery expected",
   "arrives-late": "Arrives after the install date",
 };
 

@@ -3,6 +3,7 @@ import { getRevisionView } from "@/db/queries/spec-revision-view";
 import { requireApiUser } from "@/lib/auth/session";
 import { route } from "@/lib/http";
 import { refuseEdit } from "@/lib/spec/frozen";
+import { toRevisionJson } from "@/lib/spec/revision-json";
 
 type Context = { params: Promise<{ revisionId: string }> };
 
@@ -10,20 +11,7 @@ type Context = { params: Promise<{ revisionId: string }> };
 export const GET = route(async (_request: Request, { params }: Context) => {
   const actor = await requireApiUser();
   const { revisionId } = await params;
-  const view = await getRevisionView(actor, revisionId);
-  return NextResponse.json({
-    ...view.revision,
-    verified: view.verified,
-    issuedBy: view.issuedBy,
-    project: view.project,
-    scope: view.scope,
-    content: view.content,
-    lines: view.lines,
-    acknowledgements: view.acknowledgements,
-    changes: view.changes ? { since: view.baseline, ...view.changes } : null,
-    newer: view.newer,
-    suppliers: view.suppliers,
-  });
+  return NextResponse.json(toRevisionJson(await getRevisionView(actor, revisionId)), { headers: { "Cache-Control": "private, no-store" } });
 });
 
 export const PATCH = refuseEdit("GET");

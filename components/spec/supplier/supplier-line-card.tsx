@@ -1,0 +1,49 @@
+import { Figure } from "@/components/ui";
+import { formatDay } from "@/lib/format";
+import { quantityDigits } from "@/lib/spec/group";
+import type { RevisionJson } from "@/lib/spec/revision-json";
+import { LineCautions } from "../line-cautions";
+import { LineStatusBadge } from "../line-status";
+import { OrderDatesForm } from "./order-dates-form";
+
+type Line = RevisionJson["lines"][number];
+
+/** One line for a supplier, as a card: what, where, how many, by when, and their order dates. */
+export function SupplierLineCard({ revisionId, line, canRecord, whyNot }: { revisionId: string; line: Line; canRecord: boolean; whyNot: string }) {
+  return (
+    <li className="flex flex-col gap-3 rounded-lg border border-line bg-card p-4 shadow-card" data-late={line.status === "order-overdue" || line.status === "arrives-late" || undefined}>
+      <div className="flex flex-col gap-0.5">
+        <h3 className="text-lg font-semibold">{line.item}</h3>
+        <p className="text-ink-soft">
+          {line.room}
+          {line.location && line.location !== line.room ? ` · ${line.location}` : ""}
+        </p>
+      </div>
+      <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1">
+        <dt className="text-ink-soft">Finish</dt>
+        <dd>{line.finishName}</dd>
+        <dt className="text-ink-soft">Product code</dt>
+        <dd className="figures">{line.productCode ?? "none given"}</dd>
+        <dt className="text-ink-soft">Quantity</dt>
+        <dd>
+          <Figure value={line.quantity} digits={quantityDigits(line.quantity)} unit={line.unit} />
+        </dd>
+        <dt className="text-ink-soft">Lead time</dt>
+        <dd>
+          <Figure value={line.leadTimeDays} unit="days" />
+        </dd>
+        <dt className="text-ink-soft">Order by</dt>
+        <dd className="font-medium">{line.orderByDate ? formatDay(line.orderByDate) : "not set yet"}</dd>
+      </dl>
+      <LineCautions keys={line.cautions} />
+      <LineStatusBadge status={line.status} order={line.order} />
+      <div className="border-t border-line pt-3">
+        {canRecord ? (
+          <OrderDatesForm revisionId={revisionId} lineId={line.id} item={line.item} orderedOn={line.order?.orderedOn ?? null} expectedOn={line.order?.expectedOn ?? null} />
+        ) : (
+          <p className="text-ink-soft">{whyNot}</p>
+        )}
+      </div>
+    </li>
+  );
+}
