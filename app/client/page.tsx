@@ -1,7 +1,9 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { todayUtc } from "@/db/queries/attention";
+import { getProjectBudget } from "@/db/queries/decision-budget";
 import { getClientHome } from "@/db/queries/homes";
+import { BudgetSummary } from "@/components/decisions/budget-summary";
 import { Badge, Card, EmptyState, Notice, PageHeader } from "@/components/ui";
 import { requireRole } from "@/lib/auth/session";
 import { describeDue, formatDay } from "@/lib/format";
@@ -11,11 +13,13 @@ export const metadata: Metadata = { title: "My project" };
 export default async function ClientHome() {
   const actor = await requireRole("client");
   const { projects, waiting } = await getClientHome(actor);
+  const budgets = new Map(await Promise.all(projects.map(async (p) => [p.id, await getProjectBudget(p.id)] as const)));
   const today = todayUtc();
   return (
     <div className="space-y-8">
       {projects.map((project) => {
         const mine = waiting.filter((d) => d.projectId === project.id);
+        const budget = budgets.get(project.id);
         return (
           <section key={project.id} className="space-y-6" aria-labelledby={`project-${project.id}`}>
             <PageHeader
@@ -46,6 +50,10 @@ export default async function ClientHome() {
                 </ul>
               )}
             </Card>
+            {budget && <BudgetSummary budget={budget} heading="Your running total" />}
+            <Link href="/client/decisions" className="inline-flex min-h-tap items-center font-medium underline underline-offset-4">
+              All decisions, including the approved ones
+            </Link>
           </section>
         );
       })}

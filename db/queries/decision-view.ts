@@ -1,7 +1,7 @@
 import { asc, desc, eq, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/sqlite-core";
 import { db } from "@/db";
-import { approvals, choices, options, rooms, users, variations } from "@/db/schema";
+import { approvals, choices, rooms, users, variations } from "@/db/schema";
 import { summariseBudget } from "@/lib/decisions/budget";
 import type { ApprovalView, ChoiceView, DecisionView, PersonRef, VariationView } from "@/lib/decisions/types";
 import { loadBudgetDecisions } from "./decision-budget";
@@ -119,9 +119,4 @@ async function loadVariations(decisionId: string, reader: Reader): Promise<Omit<
     decidedBy: person(v.decidedBy, dd?.name ?? null, dd?.email ?? null),
     decidedAt: iso(v.decidedAt),
   }));
-}
-
-/** The option ids of a decision (for checking a choice belongs to it). */
-export async function listOptionIds(decisionId: string, reader: Reader = db) {
-  return (await reader.select({ id: options.id }).from(options).where(eq(options.decisionId, decisionId))).map((r) => r.id);
 }

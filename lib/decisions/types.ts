@@ -111,3 +111,16 @@ export type DecisionListItem = {
   openVariation: VariationStatus | null;
   orderBy: OrderBySuggestion | null;
 };
+
+/** A finish as the option editor offers it. */
+export type PickerFinish = {
+  id: string;
+  name: string;
+  category: string;
+  productCode: string | null;
+  surface: string | null;
+  supplierName: string | null;
+  unit: string;
+  leadTimeDays: number;
+  hex: string;
+};
