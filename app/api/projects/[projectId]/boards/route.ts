@@ -3,6 +3,7 @@ import { createBoard, listBoards } from "@/db/queries/boards";
 import { requireApiUser } from "@/lib/auth/session";
 import { readJson, route } from "@/lib/http";
 import { createBoardSchema } from "@/lib/validation/board";
+import { openProjectForBoards } from "@/db/queries/board-access";
 
 type Params = { params: Promise<{ projectId: string }> };
 
@@ -17,6 +18,7 @@ export const GET = route(async (_request: Request, { params }: Params) => {
 export const POST = route(async (request: Request, { params }: Params) => {
   const actor = await requireApiUser("designer");
   const { projectId } = await params;
+  await openProjectForBoards(actor, projectId, "edit");
   const input = createBoardSchema.parse(await readJson(request));
   const board = await createBoard(actor, projectId, input);
   return NextResponse.json({ id: board.id, name: board.name, roomId: board.roomId, version: board.version }, { status: 201 });

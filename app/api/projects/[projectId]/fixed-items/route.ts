@@ -3,6 +3,7 @@ import { createFixedItem, listFixedItems } from "@/db/queries/spec-fixed-items";
 import { requireApiUser } from "@/lib/auth/session";
 import { readJson, route } from "@/lib/http";
 import { fixedItemSchema } from "@/lib/validation/spec";
+import { getProjectForStaff } from "@/db/queries/projects";
 
 type Context = { params: Promise<{ projectId: string }> };
 
@@ -16,6 +17,7 @@ export const GET = route(async (_request: Request, { params }: Context) => {
 export const POST = route(async (request: Request, { params }: Context) => {
   const actor = await requireApiUser("designer");
   const { projectId } = await params;
+  await getProjectForStaff(actor, projectId);
   const input = fixedItemSchema.parse(await readJson(request));
   return NextResponse.json(await createFixedItem(actor, projectId, input), { status: 201 });
 });

@@ -3,6 +3,7 @@ import { requireApiUser } from "@/lib/auth/session";
 import { readJson, route } from "@/lib/http";
 import { changeItemSchema } from "@/lib/validation/board";
 import { readDeleteVersion, respondWithBoard } from "../../board-response";
+import { openBoard } from "@/db/queries/board-access";
 
 type Params = { params: Promise<{ boardId: string; itemId: string }> };
 
@@ -10,6 +11,7 @@ type Params = { params: Promise<{ boardId: string; itemId: string }> };
 export const PATCH = route(async (request: Request, { params }: Params) => {
   const actor = await requireApiUser("designer");
   const { boardId, itemId } = await params;
+  await openBoard(actor, boardId, "edit");
   const input = changeItemSchema.parse(await readJson(request));
   await changeBoardItem(actor, boardId, itemId, input);
   return respondWithBoard(actor, boardId, request);

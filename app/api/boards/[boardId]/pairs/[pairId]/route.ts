@@ -3,6 +3,7 @@ import { requireApiUser } from "@/lib/auth/session";
 import { readJson, route } from "@/lib/http";
 import { changePairSchema } from "@/lib/validation/board";
 import { readDeleteVersion, respondWithBoard } from "../../board-response";
+import { openBoard } from "@/db/queries/board-access";
 
 type Params = { params: Promise<{ boardId: string; pairId: string }> };
 
@@ -10,6 +11,7 @@ type Params = { params: Promise<{ boardId: string; pairId: string }> };
 export const PATCH = route(async (request: Request, { params }: Params) => {
   const actor = await requireApiUser("designer");
   const { boardId, pairId } = await params;
+  await openBoard(actor, boardId, "edit");
   const input = changePairSchema.parse(await readJson(request));
   await changeBoardPair(actor, boardId, pairId, input);
   return respondWithBoard(actor, boardId, request);

@@ -3,6 +3,7 @@ import { deleteFixedItem, getFixedItem, updateFixedItem } from "@/db/queries/spe
 import { requireApiUser } from "@/lib/auth/session";
 import { HttpError, readJson, route } from "@/lib/http";
 import { fixedItemSchema } from "@/lib/validation/spec";
+import { getProjectForStaff } from "@/db/queries/projects";
 
 const isObject = (v: unknown): v is Record<string, unknown> => typeof v === "object" && v !== null && !Array.isArray(v);
 
