@@ -26,6 +26,7 @@ export function SpecGroups({ lines, pending = [], grouping, showStatus = true, c
             lines={group.lines}
             pending={grouping === "room" ? pending.filter((p) => p.room === group.key) : []}
             showSupplier={grouping === "room"}
+            showRoom={grouping === "supplier"}
             showStatus={showStatus}
             cautionNumbers={cautionNumbers}
           />
@@ -44,7 +45,7 @@ export function SpecGroups({ lines, pending = [], grouping, showStatus = true, c
           <h2 id="group-pending" className="font-display text-2xl font-semibold">
             Not decided yet
           </h2>
-          <SpecLinesTable caption="Not decided yet" lines={[]} pending={pending} showSupplier={false} showStatus={showStatus} />
+          <SpecLinesTable caption="Not decided yet" lines={[]} pending={pending} showSupplier={false} showRoom showStatus={showStatus} />
         </section>
       )}
     </div>

@@ -15,13 +15,15 @@ export type TableLine = SpecLineContent & {
   variationPending?: boolean;
 };
 
-export type PendingRow = { id: string; title: string; dueDate: string; status: string };
+export type PendingRow = { id: string; title: string; dueDate: string; status: string; room?: string };
 
 type Props = {
   caption: ReactNode;
   lines: TableLine[];
   pending?: PendingRow[];
   showSupplier?: boolean;
+  /** Grouped by supplier, each line says which room it is for. */
+  showRoom?: boolean;
   showStatus?: boolean;
   cautionNumbers?: Map<string, number>;
 };
@@ -30,14 +32,14 @@ type Props = {
  * One group of a specification (a room or a supplier) as a schedule. Late lines and decisions
  * still open stand out with a tinted row and words that say why.
  */
-export function SpecLinesTable({ caption, lines, pending = [], showSupplier = true, showStatus = true, cautionNumbers }: Props) {
+export function SpecLinesTable({ caption, lines, pending = [], showSupplier = true, showRoom = false, showStatus = true, cautionNumbers }: Props) {
   const columns = 5 + (showSupplier ? 1 : 0) + (showStatus ? 1 : 0);
   return (
     <Table caption={caption} captionHidden className="spec-table">
       <THead>
         <tr>
-          <Th>Item</Th>
-          <Th>Finish</Th>
+          <Th className="min-w-48">Item</Th>
+          <Th className="min-w-40">Finish</Th>
           {showSupplier && <Th>Supplier</Th>}
           <Th numeric>Quantity</Th>
           <Th numeric>Lead time</Th>
@@ -52,7 +54,9 @@ export function SpecLinesTable({ caption, lines, pending = [], showSupplier = tr
             <Tr key={line.lineKey} className={cx(late && "bg-problem-wash")} data-late={late || undefined}>
               <Td>
                 <span className="font-medium">{line.item}</span>
-                {line.location && <span className="block text-ink-soft">{line.location}</span>}
+                {(showRoom || line.location) && (
+                  <span className="block text-ink-soft">{[showRoom ? line.room : null, line.location].filter(Boolean).join(" · ")}</span>
+                )}
                 <LineCautions keys={line.cautions} numbers={cautionNumbers} />
               </Td>
               <Td>
@@ -83,7 +87,9 @@ export function SpecLinesTable({ caption, lines, pending = [], showSupplier = tr
           <Tr key={p.id} className="bg-caution-wash" data-pending>
             <Td>
               <span className="font-medium">{p.title}</span>
-              <span className="block text-ink-soft">Due {formatDay(p.dueDate)}</span>
+              <span className="block text-ink-soft">
+                {showRoom && p.room ? `${p.room} · ` : ""}Due {formatDay(p.dueDate)}
+              </span>
             </Td>
             <Td colSpan={columns - 1}>
               <Badge tone="caution">{p.status === "chosen" ? "Chosen, not approved yet" : "Waiting for the client's choice"}</Badge>

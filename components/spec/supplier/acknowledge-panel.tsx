@@ -6,13 +6,13 @@ import { Badge, Button } from "@/components/ui";
 import { formatShortDay } from "@/lib/spec/format";
 import { postAcknowledgement, revisionKey } from "./api";
 
-type Props = { revisionId: string; letter: string; acknowledgedAt: string | null; byName: string | null };
+type Props = { revisionId: string; letter: string; acknowledgedAt: string | null; byName: string | null; replaced: boolean };
 
 /**
  * Receipt first: a supplier confirms they have revision X before they record orders against it.
  * The confirmation settles into place (motion explains that the state changed; none if reduced).
  */
-export function AcknowledgePanel({ revisionId, letter, acknowledgedAt, byName }: Props) {
+export function AcknowledgePanel({ revisionId, letter, acknowledgedAt, byName, replaced }: Props) {
   const queryClient = useQueryClient();
   const mutation = useMutation({
     mutationFn: () => postAcknowledgement(revisionId),
@@ -25,7 +25,7 @@ export function AcknowledgePanel({ revisionId, letter, acknowledgedAt, byName }:
         <Badge tone="ok">You acknowledged revision {letter}</Badge>
         <p className="text-ink-soft">
           On {formatShortDay(acknowledgedAt.slice(0, 10))}
-          {byName ? ` by ${byName}` : ""}. Record order dates on each line below.
+          {byName ? ` by ${byName}` : ""}.{replaced ? "" : " Record order dates on each line below."}
         </p>
       </motion.div>
     );

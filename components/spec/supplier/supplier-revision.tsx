@@ -35,7 +35,7 @@ export function SupplierRevision({ initial }: { initial: RevisionJson }) {
         </Notice>
       )}
       <Card>
-        <AcknowledgePanel revisionId={rev.id} letter={rev.letter} acknowledgedAt={ack?.acknowledgedAt ?? null} byName={ack?.byName ?? null} />
+        <AcknowledgePanel revisionId={rev.id} letter={rev.letter} acknowledgedAt={ack?.acknowledgedAt ?? null} byName={ack?.byName ?? null} replaced={Boolean(rev.newer)} />
       </Card>
       <Card title={rev.changes ? `What changed for you since revision ${rev.changes.since.letter}` : "What's new for you"} level={2}>
         {rev.changes ? (
