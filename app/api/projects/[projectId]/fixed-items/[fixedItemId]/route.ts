@@ -3,7 +3,6 @@ import { deleteFixedItem, getFixedItem, updateFixedItem } from "@/db/queries/spe
 import { requireApiUser } from "@/lib/auth/session";
 import { HttpError, readJson, route } from "@/lib/http";
 import { fixedItemSchema } from "@/lib/validation/spec";
-import { getProjectForStaff } from "@/db/queries/projects";
 
 const isObject = (v: unknown): v is Record<string, unknown> => typeof v === "object" && v !== null && !Array.isArray(v);
 
@@ -13,9 +12,10 @@ type Context = { params: Promise<{ projectId: string; fixedItemId: string }> };
 export const PATCH = route(async (request: Request, { params }: Context) => {
   const actor = await requireApiUser("designer");
   const { projectId, fixedItemId } = await params;
+  // Access first: someone who may not see the item learns nothing from how their body is judged.
+  const { item } = await getFixedItem(actor, projectId, fixedItemId);
   const body = await readJson(request);
   if (!isObject(body)) throw new HttpError(400, "The request body must be a JSON object of the fields to change.");
-  const { item } = await getFixedItem(actor, projectId, fixedItemId);
   const { roomId, finishId, location, quantity, unit, notes } = item;
   const input = fixedItemSchema.parse({ roomId, finishId, item: item.item, location, quantity, unit, notes, ...body });
   return NextResponse.json(await updateFixedItem(actor, projectId, fixedItemId, input));
