@@ -27,13 +27,14 @@ export async function openProjectForBoards(actor: Actor, projectId: string, mode
   return { project, access };
 }
 
-/** A board with its project and room, or 404/403 as above. */
+/** A board with its project, room and the studio's check settings, or 404/403 as above. */
 export async function openBoard(actor: Actor, boardId: string, mode: BoardMode) {
   const [row] = await db
-    .select({ board: boards, project: projects, room: rooms })
+    .select({ board: boards, project: projects, room: rooms, checkSettings: studios.checkSettings })
     .from(boards)
     .innerJoin(projects, eq(projects.id, boards.projectId))
     .innerJoin(rooms, eq(rooms.id, boards.roomId))
+    .innerJoin(studios, eq(studios.id, projects.studioId))
     .where(eq(boards.id, boardId))
     .limit(1);
   if (!row) throw notFound("That board");

@@ -2,6 +2,7 @@ import { and, asc, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { boards, rooms } from "@/db/schema";
 import { computeBoardChecks, countVerdicts, tintForLight } from "@/lib/boards/board-checks";
+import { resolveThresholds } from "@/lib/boards/check-settings";
 import { DAYLIGHT } from "@/lib/boards/lights";
 import type { BoardList, BoardSummary } from "@/lib/boards/types";
 import { assembleBoardView } from "@/lib/boards/view";
@@ -15,12 +16,9 @@ import type { Actor } from "./users";
 
 /** The board with its items, pairs and checks under one light (daylight unless told). */
 export async function getBoardView(actor: Actor, boardId: string, cct: number = DAYLIGHT.cct) {
-  const { board, project, room, access } = await openBoard(actor, boardId, "read");
-  const [items, pairs, { thresholds, settingsIgnored }] = await Promise.all([
-    readItemRows([board.id]),
-    readPairRows([board.id]),
-    getStudioThresholds(project.studioId),
-  ]);
+  const { board, project, room, access, checkSettings } = await openBoard(actor, boardId, "read");
+  const [items, pairs] = await Promise.all([readItemRows([board.id]), readPairRows([board.id])]);
+  const { thresholds, settingsIgnored } = resolveThresholds(checkSettings);
   return assembleBoardView({
     board: { id: board.id, name: board.name, version: board.version, updatedAt: board.updatedAt },
     project: { id: project.id, name: project.name },
