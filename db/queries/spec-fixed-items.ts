@@ -5,6 +5,7 @@ import { HttpError, notFound } from "@/lib/http";
 import type { FixedItemInput } from "@/lib/validation/spec";
 import { writeAudit } from "./audit";
 import { getProjectForStaff } from "./projects";
+import { writeTransaction } from "./serial-write";
 import type { Actor } from "./users";
 
 export async function listFixedItems(actor: Actor, projectId: string) {
@@ -79,7 +80,7 @@ const fields = (input: FixedItemInput) => ({
 export async function createFixedItem(actor: Actor, projectId: string, input: FixedItemInput) {
   const project = await getProjectForStaff(actor, projectId);
   await checkReferences(project, input);
-  return db.transaction(async (tx) => {
+  return writeTransaction(async (tx) => {
     const [item] = await tx.insert(fixedItems).values({ projectId: project.id, ...fields(input) }).returning();
     if (!item) throw new Error("fixed item insert returned nothing");
     await writeAudit({ studioId: project.studioId, projectId: project.id, actorId: actor.userId, action: "fixed-item.added", entityType: "fixed_item", entityId: item.id, detail: { item: item.item } }, tx);
@@ -90,7 +91,7 @@ export async function createFixedItem(actor: Actor, projectId: string, input: Fi
 export async function updateFixedItem(actor: Actor, projectId: string, fixedItemId: string, input: FixedItemInput) {
   const { project, item: before } = await getFixedItem(actor, projectId, fixedItemId);
   await checkReferences(project, input);
-  return db.transaction(async (tx) => {
+  return writeTransaction(async (tx) => {
     const [item] = await tx.update(fixedItems).set(fields(input)).where(eq(fixedItems.id, before.id)).returning();
     if (!item) throw notFound("That fixed item");
     await writeAudit({ studioId: project.studioId, projectId: project.id, actorId: actor.userId, action: "fixed-item.changed", entityType: "fixed_item", entityId: item.id, detail: { before: fields(before), after: fields(input) } }, tx);
@@ -100,7 +101,7 @@ export async function updateFixedItem(actor: Actor, projectId: string, fixedItem
 
 export async function deleteFixedItem(actor: Actor, projectId: string, fixedItemId: string) {
   const { project, item } = await getFixedItem(actor, projectId, fixedItemId);
-  await db.transaction(async (tx) => {
+  await writeTransaction(async (tx) => {
     await tx.delete(fixedItems).where(eq(fixedItems.id, item.id));
     await writeAudit({ studioId: project.studioId, projectId: project.id, actorId: actor.userId, action: "fixed-item.removed", entityType: "fixed_item", entityId: item.id, detail: { item: item.item } }, tx);
   });

@@ -7,6 +7,7 @@ import { lineStatus } from "@/lib/spec/status";
 import { frozenLineFields, type LineOrderInput } from "@/lib/validation/spec";
 import { todayUtc } from "./attention";
 import { writeAudit } from "./audit";
+import { writeTransaction } from "./serial-write";
 import { openRevision, readLatestRevision } from "./spec-revisions";
 import type { Actor } from "./users";
 
@@ -33,7 +34,7 @@ export async function acknowledgeRevision(actor: Actor, revisionId: string) {
   const { revision, project, scope } = await openRevision(actor, revisionId);
   if (scope.kind !== "supplier") throw forbidden();
   const { supplierId } = scope;
-  const created = await db.transaction(async (tx) => {
+  const created = await writeTransaction(async (tx) => {
     const [row] = await tx
       .insert(supplierAcknowledgements)
       .values({ revisionId: revision.id, supplierId, userId: actor.userId })
@@ -102,7 +103,7 @@ export async function recordLineOrder(actor: Actor, revisionId: string, lineId: 
   const expectedOn = input.expectedOn === undefined ? (existing?.expectedOn ?? null) : input.expectedOn;
   checkOrderDates(orderedOn, expectedOn, today);
   const values = { lineId: line.id, orderedOn, expectedOn, updatedBy: actor.userId, updatedAt: new Date() };
-  await db.transaction(async (tx) => {
+  await writeTransaction(async (tx) => {
     await tx.insert(lineOrders).values(values).onConflictDoUpdate({ target: lineOrders.lineId, set: { orderedOn, expectedOn, updatedBy: actor.userId, updatedAt: values.updatedAt } });
     await writeAudit(
       {

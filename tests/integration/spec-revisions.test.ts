@@ -177,4 +177,23 @@ describe("issuing revisions", () => {
     expect(isRaceLost(error)).toBe(true);
     expect(isRaceLost(new Error("no such table"))).toBe(false);
   });
+
+  // Last in the file: the libSQL connection that met the lock is not reliable for later writes.
+  it("answers 409, writing nothing, when another process holds the database's write lock", async () => {
+    actAsAny("designer");
+    await addItem("Lock check");
+    const before = ((await call(getList, { projectId: project })).body.items as unknown[]).length;
+    // A second connection stands in for another server process writing at the same moment.
+    const { client } = createDatabase(process.env.DATABASE_URL ?? "");
+    const other = await client.transaction("write");
+    try {
+      const res = await issueNext();
+      expect(res.status).toBe(409);
+      expect(res.body.error).toMatch(/same moment/);
+    } finally {
+      await other.rollback();
+      client.close();
+    }
+    expect(((await call(getList, { projectId: project })).body.items as unknown[]).length).toBe(before);
+  }, 30_000);
 });
