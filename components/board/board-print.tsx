@@ -40,14 +40,14 @@ export function BoardPrint({ view, actions }: { view: BoardView; actions?: React
         <TBody>
           {view.items.map((item) => (
             <Tr key={item.id}>
-              <Td>
+              <Td className="min-w-36">
                 <span className="flex items-center gap-2">
                   <span className="inline-block size-5 shrink-0 border border-stone-400" data-swatch-colour="" style={{ backgroundColor: item.finish.tint }} />
                   {item.label}
                 </span>
               </Td>
-              <Td>{item.finish.name}</Td>
-              <Td className="figures">{item.finish.productCode ?? "—"}</Td>
+              <Td className="min-w-36">{item.finish.name}</Td>
+              <Td className="figures whitespace-nowrap">{item.finish.productCode ?? "—"}</Td>
               <Td numeric>
                 {formatLrv(item.finish.lrv)} <span className="text-stone-600">({SOURCE[item.finish.lrvSource]})</span>
               </Td>
@@ -69,7 +69,7 @@ export function BoardPrint({ view, actions }: { view: BoardView; actions?: React
         <TBody>
           {view.checks.map((check) => (
             <Tr key={check.pairId}>
-              <Td>
+              <Td className="min-w-64">
                 <span className="font-medium">
                   {names.get(check.itemAId)} and {names.get(check.itemBId)}
                 </span>
