@@ -1,7 +1,7 @@
 "use client";
 
 import { useQuery } from "@tanstack/react-query";
-import { useDeferredValue, useId, useState } from "react";
+import { useEffect, useId, useState } from "react";
 import { Button, Input, lrvText, Select, Spinner } from "@/components/ui";
 import type { FinderHit } from "@/lib/boards/types";
 import { fetchJson } from "./board-fetch";
@@ -18,7 +18,12 @@ export function FinishPicker({ boardId, categories, onPlace }: Props) {
   const [q, setQ] = useState("");
   const [category, setCategory] = useState("");
   const [near, setNear] = useState<FinderHit | null>(null);
-  const words = useDeferredValue(q.trim());
+  const [words, setWords] = useState("");
+  // Ask the server once typing pauses, not on every key.
+  useEffect(() => {
+    const timer = setTimeout(() => setWords(q.trim()), 250);
+    return () => clearTimeout(timer);
+  }, [q]);
   const params = new URLSearchParams();
   if (words) params.set("q", words);
   if (category) params.set("category", category);
