@@ -115,10 +115,15 @@ export function readCsvRow(cells: Partial<Record<CsvColumn, string>>): CsvRowRes
   if (lrvText !== "" && lrv === null) errors.push(`lrv: "${lrvText}" isn't a number from 0 to 100.`);
   const found = readCautions(cell("cautions"));
   if (found.unknown.length) errors.push(`cautions: ${found.unknown.map((u) => `"${u}"`).join(", ")} isn't in the list of cautions.`);
+  const category = readCategory(cell("category"));
+  const knownCategory = (finishCategoryKeys as string[]).includes(category);
+  if (!knownCategory) {
+    errors.push(cell("category") ? `category: "${cell("category")}" isn't a category. Use one of: ${finishCategoryKeys.join(", ")}.` : "category: give the finish's category.");
+  }
   const colourText = cell("colour");
   const candidate = {
     name: cell("name"),
-    category: readCategory(cell("category")),
+    category,
     productCode: cell("product_code"),
     surface: cell("finish"),
     format: cell("format"),
@@ -136,6 +141,7 @@ export function readCsvRow(cells: Partial<Record<CsvColumn, string>>): CsvRowRes
       const column = fieldToColumn[issue.path.join(".")] ?? fieldToColumn[String(issue.path[0])] ?? String(issue.path[0] ?? "row");
       // Our own messages above already explain these columns better than the schema can.
       if ((column === "unit_price" && price === null) || (column === "lead_time_days" && lead === null && cell("lead_time_days") !== "")) continue;
+      if (column === "category" && !knownCategory) continue;
       if (column === "lrv" && colourText === "" && lrvText === "") {
         errors.push("colour: give the maker's colour (like #d9d2c3) or its LRV.");
         continue;

@@ -35,7 +35,7 @@ describe("POST /api/finishes/import", () => {
     expect(report.rejected.map((r) => r.line)).toEqual([5, 6, 7, 8, 9, 10]);
     const reasons = (line: number) => report.rejected.find((r) => r.line === line)?.errors.join(" | ") ?? "";
     expect(reasons(5)).toMatch(/^name: Enter the finish's name\.$/);
-    expect(reasons(6)).toMatch(/category: Choose a category/);
+    expect(reasons(6)).toBe('category: "marble" isn\'t a category. Use one of: stone, cabinetry, flooring, tile, tapware, hardware, lighting, appliances, paint.');
     expect(reasons(7)).toMatch(/unit_price: "ten dollars" isn't an amount of dollars/);
     expect(reasons(7)).toMatch(/supplier: there is no supplier called "Nobody Stone Co"/);
     expect(reasons(8)).toMatch(/lrv: LRV runs from 0 to 100/);
