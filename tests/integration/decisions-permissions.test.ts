@@ -16,11 +16,18 @@ import { actAs, demoUserId, type Persona } from "@/tests/support/session";
 
 // The permission table of PRODUCT.md: staff of the project's studio create, edit and price;
 // the project's clients choose, approve and ask for changes; suppliers are refused (403);
-// anyone who may not see the project gets 404; signed-out callers 401.
+// anyone who may not see the project gets 404; signed-out callers 401. As in the permission
+// matrix (tests/support/permission-expectations.ts), the role is checked first: a client-only
+// step refuses any studio's staff with 403, then visibility answers 404.
 const refusals: [Persona, number][] = [
   ["anonymous", 401],
   ["stone", 403],
   ["other", 404],
+];
+const clientStepRefusals: [Persona, number][] = [
+  ["anonymous", 401],
+  ["stone", 403],
+  ["other", 403],
 ];
 const staff: Persona[] = ["owner", "designer"];
 const clients: Persona[] = ["client", "client2"];
@@ -75,12 +82,23 @@ describe("reading decisions", () => {
     },
   );
 
-  it("another project's client sees neither the list nor a decision (404)", async () => {
+  it("another project's client sees neither the list nor a decision, and can't pick or approve (404)", async () => {
     actAsUser(outsiderClient);
-    expectNoDecisionData(await call(listDecisions, { projectId: demo.project }));
+    const list = await call(listDecisions, { projectId: demo.project });
+    expect(list.status).toBe(404);
+    expectNoDecisionData(list);
     const one = await call(getDecision, { decisionId: demo.pendant });
     expect(one.status).toBe(404);
     expectNoDecisionData(one);
+    expect((await call(choose, { decisionId: demo.pendant }, { body: { optionId: demo.option("kp-opal") } })).status).toBe(404);
+    expect((await call(approve, { decisionId: demo.pendant }, { body: { optionId: demo.option("kp-opal"), confirm: true } })).status).toBe(404);
+  });
+
+  it("checks access before the body: an outsider with an empty body is refused, not told what's missing", async () => {
+    expect((await as("other", () => call(createDecision, { projectId: demo.project }, { body: {} }))).status).toBe(404);
+    expect((await as("client", () => call(patchDecision, { decisionId: demo.pendant }, { method: "PATCH", body: {} }))).status).toBe(403);
+    expect((await as("designer", () => call(choose, { decisionId: demo.pendant }, { body: {} }))).status).toBe(403);
+    expect((await as("designer", () => call(createDecision, { projectId: demo.project }, { body: {} }))).status).toBe(400);
   });
 
   it("answers 404 for a decision that doesn't exist", async () => {
@@ -128,7 +146,7 @@ describe("designer steps", () => {
 });
 
 describe("client steps", () => {
-  it.each([...refusals, ["owner", 403], ["designer", 403], ["client", 200], ["client2", 200]] as [Persona, number][])(
+  it.each([...clientStepRefusals, ["owner", 403], ["designer", 403], ["client", 200], ["client2", 200]] as [Persona, number][])(
     "POST /api/decisions/:id/choice as %s → %i",
     async (persona, status) => {
       const body = { optionId: demo.option("kp-opal"), comment: `${persona} likes the opal` };
@@ -136,7 +154,7 @@ describe("client steps", () => {
     },
   );
 
-  it.each([...refusals, ["owner", 403], ["designer", 403]] as [Persona, number][])("POST /api/decisions/:id/approve as %s → %i", async (persona, status) => {
+  it.each([...clientStepRefusals, ["owner", 403], ["designer", 403]] as [Persona, number][])("POST /api/decisions/:id/approve as %s → %i", async (persona, status) => {
     const body = { optionId: demo.option("kp-opal"), confirm: true };
     expect((await as(persona, () => call(approve, { decisionId: demo.pendant }, { body }))).status).toBe(status);
   });
@@ -183,11 +201,11 @@ describe("variation steps", () => {
     },
   );
 
-  it.each([...refusals, ["owner", 403], ["designer", 403]] as [Persona, number][])("POST …/variations/:id/decline as %s → %i", async (persona, status) => {
+  it.each([...clientStepRefusals, ["owner", 403], ["designer", 403]] as [Persona, number][])("POST …/variations/:id/decline as %s → %i", async (persona, status) => {
     expect((await as(persona, () => call(decline, kb, { body: {} }))).status).toBe(status);
   });
 
-  it.each([...refusals, ["owner", 403], ["designer", 403], ["client2", 200], ["client", 409]] as [Persona, number][])(
+  it.each([...clientStepRefusals, ["owner", 403], ["designer", 403], ["client2", 200], ["client", 409]] as [Persona, number][])(
     "POST …/variations/:id/approve as %s → %i (the second client finds it already approved)",
     async (persona, status) => {
       expect((await as(persona, () => call(approveVariation, kb, { body: { confirm: true } }))).status).toBe(status);

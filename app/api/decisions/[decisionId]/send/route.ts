@@ -8,7 +8,7 @@ type Context = { params: Promise<{ decisionId: string }> };
 
 /** "Send to client": e-mails the project's clients that the decision is waiting for them. */
 export const POST = route(async (request, { params }: Context) => {
-  const actor = await requireApiUser();
+  const actor = await requireApiUser("designer");
   const { decisionId } = await params;
   const { decision, project } = await markDecisionSent(actor, decisionId);
   await notifyDecisionWaiting(project, decision, request.headers.get("origin") ?? undefined);
