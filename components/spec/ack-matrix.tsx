@@ -17,7 +17,7 @@ export function AckMatrix({ revisions, suppliers }: { revisions: Revision[]; sup
         </tr>
       </THead>
       <TBody>
-        {[...revisions].reverse().map((r) => (
+        {[...revisions].reverse().map((r, index) => (
           <Tr key={r.id}>
             <Th scope="row" className="text-ink">
               {r.letter}
@@ -31,8 +31,11 @@ export function AckMatrix({ revisions, suppliers }: { revisions: Revision[]; sup
                     <span className="text-ink-soft">No lines</span>
                   ) : ack ? (
                     <span className="text-ok-ink">Acknowledged {formatShortDay(ack.acknowledgedAt.toISOString().slice(0, 10))}</span>
-                  ) : (
+                  ) : index === 0 ? (
                     <span className="font-medium text-caution-ink">Not acknowledged</span>
+                  ) : (
+                    // A replaced revision nobody acknowledged needs no chasing: the latest one does.
+                    <span className="text-ink-soft">Not acknowledged</span>
                   )}
                 </Td>
               );

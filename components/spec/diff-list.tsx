@@ -4,11 +4,12 @@ import { fieldLabels, visibleChanges, type FieldChange, type SpecDiff } from "@/
 import { formatDay } from "@/lib/format";
 import type { SpecLineContent } from "@/lib/spec/types";
 
-function show(change: FieldChange, value: FieldChange["before"]): string {
+function show(change: FieldChange, value: FieldChange["before"], unit: string): string {
   if (value === null || value === "") return "none";
   if (Array.isArray(value)) return value.length ? cautionTitles(value).join("; ") : "none";
   if (change.field === "orderByDate" && typeof value === "string") return formatDay(value);
   if (change.field === "leadTimeDays") return `${String(value)} days`;
+  if (change.field === "quantity") return `${String(value)} ${unit}`;
   return String(value);
 }
 
@@ -50,8 +51,8 @@ export function DiffList({ diff, empty }: { diff: SpecDiff; empty: string }) {
                 <div key={f.field} className="contents">
                   <dt className="text-ink-soft">{fieldLabels[f.field]}</dt>
                   <dd>
-                    <del className="text-ink-soft">{show(f, f.before)}</del> <span aria-hidden="true">→</span>
-                    <span className="sr-only">now</span> <ins className="font-medium no-underline">{show(f, f.after)}</ins>
+                    <del className="text-ink-soft">{show(f, f.before, c.before.unit)}</del> <span aria-hidden="true">→</span>
+                    <span className="sr-only">now</span> <ins className="font-medium no-underline">{show(f, f.after, c.after.unit)}</ins>
                   </dd>
                 </div>
               ))}

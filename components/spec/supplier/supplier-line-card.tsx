@@ -1,4 +1,4 @@
-import { Figure } from "@/components/ui";
+import { Badge, Figure } from "@/components/ui";
 import { formatDay } from "@/lib/format";
 import { quantityDigits } from "@/lib/spec/group";
 import type { RevisionJson } from "@/lib/spec/revision-json";
@@ -9,10 +9,13 @@ import { OrderDatesForm } from "./order-dates-form";
 type Line = RevisionJson["lines"][number];
 
 /** One line for a supplier, as a card: what, where, how many, by when, and their order dates. */
-export function SupplierLineCard({ revisionId, line, canRecord, whyNot }: { revisionId: string; line: Line; canRecord: boolean; whyNot: string }) {
+type Props = { revisionId: string; line: Line; canRecord: boolean; whyNot: string; change: { kind: "added" | "changed"; since: string } | null };
+
+export function SupplierLineCard({ revisionId, line, canRecord, whyNot, change }: Props) {
   return (
     <li className="flex flex-col gap-3 rounded-lg border border-line bg-card p-4 shadow-card" data-late={line.status === "order-overdue" || line.status === "arrives-late" || undefined}>
-      <div className="flex flex-col gap-0.5">
+      <div className="flex flex-col items-start gap-0.5">
+        {change && <Badge tone={change.kind === "added" ? "ok" : "caution"}>{change.kind === "added" ? "New" : "Changed"} since revision {change.since}</Badge>}
         <h3 className="text-lg font-semibold">{line.item}</h3>
         <p className="text-ink-soft">
           {line.room}

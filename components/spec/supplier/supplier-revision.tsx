@@ -12,6 +12,14 @@ import { AcknowledgePanel } from "./acknowledge-panel";
 import { fetchRevision, revisionKey } from "./api";
 import { SupplierLineCard } from "./supplier-line-card";
 
+function changeOf(rev: RevisionJson, lineKey: string) {
+  if (!rev.changes) return null;
+  const since = rev.changes.since.letter;
+  if (rev.changes.added.some((l) => l.lineKey === lineKey)) return { kind: "added" as const, since };
+  if (rev.changes.changed.some((c) => c.lineKey === lineKey)) return { kind: "changed" as const, since };
+  return null;
+}
+
 /** A supplier's view of one revision: acknowledge it, see what changed for them, record order dates. */
 export function SupplierRevision({ initial }: { initial: RevisionJson }) {
   const { data: rev } = useQuery({ queryKey: revisionKey(initial.id), queryFn: () => fetchRevision(initial.id), initialData: initial });
@@ -50,7 +58,7 @@ export function SupplierRevision({ initial }: { initial: RevisionJson }) {
         </h2>
         <ul className="flex flex-col gap-4">
           {rev.lines.map((line) => (
-            <SupplierLineCard key={line.id} revisionId={rev.id} line={line} canRecord={canRecord} whyNot={whyNot} />
+            <SupplierLineCard key={line.id} revisionId={rev.id} line={line} canRecord={canRecord} whyNot={whyNot} change={changeOf(rev, line.lineKey)} />
           ))}
         </ul>
       </section>
