@@ -199,3 +199,25 @@ describe("a decision from first e-mail to an approved variation", () => {
     ]);
   });
 });
+
+describe("a variation that brings a new option", () => {
+  it("adds the option through the variation, marked as added by it, and carries it once approved", async () => {
+    actAs("client2");
+    const asked = await call(requestVariation, { decisionId: demo.laundry }, { body: { reason: "A white top with a thicker edge instead" } });
+    expect(asked.status).toBe(201);
+    const variationId = (asked.body.variation as { id: string }).id;
+    actAs("designer");
+    const newOption = { label: "Snow composite, 40 mm edge", priceCents: 265000, notes: "Mitred edge", lines: [{ finishId: demo.finish("porcelain-chalk"), quantity: 2, unit: "m²", location: "Laundry" }] };
+    expect((await call(price, { decisionId: demo.laundry, variationId }, { body: { priceDeltaCents: 49000, timeImpactDays: 7, newOption } })).status).toBe(200);
+    const priced = await viewAs("client2", demo.laundry);
+    const added = priced.options.find((o) => o.label === newOption.label);
+    expect(added?.addedByVariation).toBe(true);
+    expect(priced.variations.find((v) => v.id === variationId)?.optionId).toBe(added?.id);
+    actAs("client");
+    expect((await call(approveVariation, { decisionId: demo.laundry, variationId }, { body: { confirm: true } })).status).toBe(200);
+    const after = await viewAs("designer", demo.laundry);
+    expect(after.lockedOptionId).toBe(added?.id);
+    // Three approvals now: the first, the demo's earlier variation, and this one; none was changed.
+    expect(after.approvals.map((a) => a.variationId)).toEqual([null, "demo-variation-lb", variationId]);
+  });
+});
