@@ -27,6 +27,7 @@ describe("who sees a revision", () => {
     ["other", 404],
     ["client", 403],
     ["client2", 403],
+    ["otherclient", 404], // a client of another studio's project
     ["stone", 200],
     ["appliances", 200],
     ["joinery", 404], // nothing of theirs in revision A
@@ -76,6 +77,7 @@ describe("who may export which CSV", () => {
     ["designer", "demo-supplier-joinery", 404],
     ["other", undefined, 404],
     ["client", undefined, 403],
+    ["otherclient", stone, 404],
     ["stone", undefined, 200],
     ["stone", stone, 200],
     ["stone", appliances, 403],
