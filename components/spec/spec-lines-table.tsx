@@ -55,7 +55,7 @@ export function SpecLinesTable({ caption, lines, pending = [], showSupplier = tr
               <Td>
                 <span className="font-medium">{line.item}</span>
                 {(showRoom || line.location) && (
-                  <span className="block text-ink-soft">{[showRoom ? line.room : null, line.location].filter(Boolean).join(" · ")}</span>
+                  <span className="block text-ink-soft">{[...new Set([showRoom ? line.room : null, line.location])].filter(Boolean).join(" · ")}</span>
                 )}
                 <LineCautions keys={line.cautions} numbers={cautionNumbers} />
               </Td>
