@@ -1,9 +1,9 @@
 import { and, eq, sql } from "drizzle-orm";
-import { db } from "@/db";
 import { boards } from "@/db/schema";
 import { conflict } from "@/lib/http";
+import { writeTransaction, type Tx } from "./serial-write";
 
-export type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
+export type { Tx };
 
 export const STALE_BOARD =
   "This board was changed in another tab or by someone else since you opened it. We have loaded the latest version; make your change again.";
@@ -29,16 +29,10 @@ export async function assertBoardVersion(tx: Tx, boardId: string, version: numbe
   if (!row || row.version !== version) throw conflict(STALE_BOARD);
 }
 
-// libSQL's embedded driver is synchronous: a second write transaction in this process waits for
-// the lock on the event loop's own thread, so the first can never finish and both stall until the
-// busy timeout (then SQLITE_BUSY, a 500). Board writes therefore queue here, one at a time per
-// process; between processes SQLite's own lock and busy timeout do the job.
-const globalQueue = globalThis as unknown as { mottleBoardWrites?: Promise<unknown> };
-
-/** One board write transaction, after any other board write of this process has finished. */
-export function runBoardWrite<T>(work: (tx: Tx) => Promise<T>): Promise<T> {
-  const previous = globalQueue.mottleBoardWrites ?? Promise.resolve();
-  const next = previous.catch(() => undefined).then(() => db.transaction(work));
-  globalQueue.mottleBoardWrites = next.catch(() => undefined);
-  return next;
-}
+/**
+ * Board writes queue with every other write of this process (serial-write.ts): a second write
+ * transaction started while one is still awaiting would block the event loop on SQLite's lock
+ * and both would stall until SQLITE_BUSY. One queue for all writes, so a board write and a
+ * decision write can't collide either.
+ */
+export const runBoardWrite = writeTransaction;
