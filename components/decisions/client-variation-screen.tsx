@@ -65,12 +65,19 @@ export function ClientVariationScreen({ initial, variationId }: { initial: Decis
       {variation.status === "priced" && mode === "approving" && (
         <section aria-label="Confirm the change" className="space-y-4 rounded-lg border border-ink bg-card p-4 sm:p-5">
           <p>
-            You are approving a variation to <strong>{view.title}</strong>: “{from?.label}” becomes{" "}
-            <strong>“{to && to.id !== from?.id ? to.label : `${from?.label} with the changed work`}”</strong>, for{" "}
+            You are approving a variation to <strong>{view.title}</strong>:{" "}
+            {to && to.id !== from?.id ? (
+              <>
+                “{from?.label}” becomes <strong>“{to.label}”</strong>
+              </>
+            ) : (
+              <>the change of work you see above, with the same finishes (“{from?.label}”)</>
+            )}
+            , for{" "}
             <strong>
               <Money cents={variation.priceDeltaCents ?? 0} signed /> including GST
             </strong>
-            , and it {describeTimeImpact(variation.timeImpactDays)}.
+            ; it {describeTimeImpact(variation.timeImpactDays)}.
           </p>
           <p className="text-ink-soft">Your first approval stays on record. Your designer will issue an updated specification to the suppliers.</p>
           <div className="flex flex-col gap-3 sm:flex-row">
@@ -98,10 +105,21 @@ export function ClientVariationScreen({ initial, variationId }: { initial: Decis
         </section>
       )}
 
-      {variation.status === "approved" && <Notice tone="info">{view.title} now carries “{to?.label}”.</Notice>}
+      {variation.status === "approved" && (
+        <Notice tone="info">
+          {optionBefore(view, variation.id) !== to?.id ? `${view.title} now carries “${to?.label}”.` : `The change is approved; ${view.title} keeps the same finishes.`} Your designer
+          will send the suppliers an updated specification.
+        </Notice>
+      )}
       <LinkButton href={`/client/decisions/${view.id}`} variant="quiet">
         Back to {view.title}
       </LinkButton>
     </div>
   );
+}
+
+/** The option the decision carried just before this variation was approved. */
+function optionBefore(view: DecisionView, variationId: string): string | null {
+  const i = view.approvals.findIndex((a) => a.variationId === variationId);
+  return i > 0 ? (view.approvals[i - 1]?.optionId ?? null) : null;
 }

@@ -14,7 +14,7 @@ export function DecisionStatusBadge({ status, forClient = false }: { status: Dec
 
 const variationWords: Record<VariationStatus, { tone: "caution" | "info" | "ok" | "neutral"; text: string }> = {
   requested: { tone: "caution", text: "Change asked for, to be priced" },
-  priced: { tone: "info", text: "Priced, waiting for the client" },
+  priced: { tone: "info", text: "Priced, waiting for approval" },
   approved: { tone: "ok", text: "Change approved" },
   declined: { tone: "neutral", text: "Declined" },
   withdrawn: { tone: "neutral", text: "Withdrawn" },

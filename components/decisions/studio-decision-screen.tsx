@@ -64,7 +64,7 @@ export function StudioDecisionScreen({ initial, today }: { initial: DecisionView
       {locked && carried && <LockedBanner approval={view.approvals.find((a) => !a.variationId)} optionLabel={carried.label} justLocked={false} audience="staff" />}
       {view.specNeedsRevision && (
         <Notice tone="caution" title="The specification needs a new revision">
-          An approved variation changed what this decision carries after the last revision was issued. Suppliers still have the old one.{" "}
+          A variation to this decision was approved after the last revision was issued, so the suppliers' copy is out of date.{" "}
           <Link href={`/studio/projects/${view.projectId}/specification`}>Go to the specification</Link>
         </Notice>
       )}

@@ -22,7 +22,7 @@ export function VariationSummary({ view, variation }: { view: DecisionView; vari
       </p>
       {priced && (
         <dl className="grid gap-x-4 gap-y-2 sm:grid-cols-[auto_1fr]">
-          <dt className="text-ink-soft">Approved until now</dt>
+          <dt className="text-ink-soft">Before the change</dt>
           <dd>{from?.label ?? "—"}</dd>
           <dt className="text-ink-soft">After the change</dt>
           <dd>
