@@ -15,6 +15,10 @@ import { printTable, type BenchRow } from "./table";
  */
 const rows: BenchRow[] = [];
 rows.push(...(await runColourBench()));
+if (existsSync("bench/boards.ts")) {
+  const boards = (await import("./boards" as string)) as { runBoardsBench: () => Promise<BenchRow[]> };
+  rows.push(...(await boards.runBoardsBench()));
+}
 if (existsSync("bench/uploads.ts")) {
   const uploads = (await import("./uploads" as string)) as { runUploadsBench: () => Promise<BenchRow[]> };
   rows.push(...(await uploads.runUploadsBench()));

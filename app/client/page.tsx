@@ -12,7 +12,7 @@ export const metadata: Metadata = { title: "My project" };
 
 export default async function ClientHome() {
   const actor = await requireRole("client");
-  const { projects, waiting } = await getClientHome(actor);
+  const { projects, waiting, boards } = await getClientHome(actor);
   const budgets = new Map(await Promise.all(projects.map(async (p) => [p.id, await getProjectBudget(p.id)] as const)));
   const today = todayUtc();
   return (
@@ -51,6 +51,24 @@ export default async function ClientHome() {
               )}
             </Card>
             {budget && <BudgetSummary budget={budget} heading="Your running total" />}
+            <Card title="Sample boards">
+              {boards.filter((b) => b.projectId === project.id).length === 0 ? (
+                <p className="text-ink-soft">Your designer hasn&apos;t shared a sample board yet.</p>
+              ) : (
+                <ul className="divide-y divide-line">
+                  {boards
+                    .filter((b) => b.projectId === project.id)
+                    .map((b) => (
+                      <li key={b.id} className="py-3">
+                        <Link href={`/client/boards/${b.id}`} className="inline-flex min-h-tap flex-col justify-center underline-offset-4 hover:underline">
+                          <span className="font-medium">{b.name}</span>
+                          <span className="text-ink-soft">{b.roomName}</span>
+                        </Link>
+                      </li>
+                    ))}
+                </ul>
+              )}
+            </Card>
             <Link href="/client/decisions" className="inline-flex min-h-tap items-center font-medium underline underline-offset-4">
               All decisions, including the approved ones
             </Link>

@@ -1,14 +1,14 @@
 import { and, asc, desc, eq, inArray, ne, sql } from "drizzle-orm";
 import { db } from "@/db";
-import { decisions, projects, rooms, specLines, specRevisions, supplierAcknowledgements } from "@/db/schema";
+import { boards, decisions, projects, rooms, specLines, specRevisions, supplierAcknowledgements } from "@/db/schema";
 import { clientProjectIds } from "@/lib/auth/permissions";
 import type { Actor } from "./users";
 
 /** A client's projects and the decisions still waiting on them, soonest due first. */
 export async function getClientHome(actor: Actor) {
   const ids = clientProjectIds(actor);
-  if (ids.length === 0) return { projects: [], waiting: [] };
-  const [projectRows, waiting] = await Promise.all([
+  if (ids.length === 0) return { projects: [], waiting: [], boards: [] };
+  const [projectRows, waiting, boardRows] = await Promise.all([
     db.select().from(projects).where(inArray(projects.id, ids)).orderBy(asc(projects.name)),
     db
       .select({
@@ -23,8 +23,14 @@ export async function getClientHome(actor: Actor) {
       .innerJoin(rooms, eq(rooms.id, decisions.roomId))
       .where(and(inArray(decisions.projectId, ids), ne(decisions.status, "locked")))
       .orderBy(asc(decisions.dueDate)),
+    db
+      .select({ id: boards.id, projectId: boards.projectId, name: boards.name, roomName: rooms.name })
+      .from(boards)
+      .innerJoin(rooms, eq(rooms.id, boards.roomId))
+      .where(inArray(boards.projectId, ids))
+      .orderBy(asc(rooms.sortOrder), asc(boards.name)),
   ]);
-  return { projects: projectRows, waiting };
+  return { projects: projectRows, waiting, boards: boardRows };
 }
 
 /** Revisions issued to this supplier contact: only those with lines for their company. */
