@@ -1,11 +1,13 @@
-import { existsSync, mkdtempSync, rmSync } from "node:fs";
+import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { migrateDatabase } from "../db/migrate";
 import { seedBenchStudio } from "../db/seed/bench-studio";
 import { run } from "../scripts/lib/processes";
 import { measureLoad, measurePageJs, rowsForEndpoint } from "./api";
+import { runBoardsBench } from "./boards";
 import { runColourBench } from "./colour";
+import { runUploadsBench } from "./uploads";
 import { residentMemoryMiB, sessionCookie, startBenchServer } from "./server";
 import { printTable, type BenchRow } from "./table";
 
@@ -15,14 +17,8 @@ import { printTable, type BenchRow } from "./table";
  */
 const rows: BenchRow[] = [];
 rows.push(...(await runColourBench()));
-if (existsSync("bench/boards.ts")) {
-  const boards = (await import("./boards" as string)) as { runBoardsBench: () => Promise<BenchRow[]> };
-  rows.push(...(await boards.runBoardsBench()));
-}
-if (existsSync("bench/uploads.ts")) {
-  const uploads = (await import("./uploads" as string)) as { runUploadsBench: () => Promise<BenchRow[]> };
-  rows.push(...(await uploads.runUploadsBench()));
-}
+rows.push(...(await runBoardsBench()));
+rows.push(...(await runUploadsBench()));
 
 const dir = mkdtempSync(path.join(tmpdir(), "mottle-bench-"));
 const databaseUrl = `file:${path.join(dir, "bench.db")}`;
