@@ -18,7 +18,7 @@ export function CautionPicker({ selected, error, onChange }: Props) {
           const on = selected.includes(key);
           return (
             <li key={key}>
-              <label htmlFor={id} className={`flex min-h-tap cursor-pointer gap-3 rounded-md border p-3 ${on ? "border-caution bg-caution-wash" : "border-line bg-card"}`}>
+              <label htmlFor={id} className={`flex h-full min-h-tap cursor-pointer gap-3 rounded-md border p-3 ${on ? "border-caution bg-caution-wash" : "border-line bg-card"}`}>
                 <input id={id} type="checkbox" className="mt-1 size-5 shrink-0 accent-[var(--color-caution-ink)]" checked={on} onChange={(e) => toggle(key, e.target.checked)} />
                 <span className="flex flex-col gap-1">
                   <span className="font-medium text-ink">{cautions[key].title}</span>

@@ -2,7 +2,7 @@
 
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { Button, Card, Notice } from "@/components/ui";
 import type { FieldErrors } from "@/lib/http";
 import { CautionPicker } from "./caution-picker";
@@ -26,6 +26,11 @@ export function FinishForm({ finishId, initial, suppliers }: Props) {
   const [saved, setSaved] = useState(initial);
   const [errors, setErrors] = useState<FieldErrors>({});
   const change = (next: Partial<FinishDraft>) => setDraft((d) => ({ ...d, ...next }));
+  const form = useRef<HTMLFormElement>(null);
+  // After a refused save, take keyboard and screen-reader users to the first field to fix.
+  useEffect(() => {
+    if (Object.keys(errors).length) form.current?.querySelector<HTMLElement>("[aria-invalid=true]")?.focus();
+  }, [errors]);
 
   const mutation = useMutation({
     mutationFn: () => saveFinish(finishId, toRequestBody(draft, finishId ? saved : null)),
@@ -47,6 +52,7 @@ export function FinishForm({ finishId, initial, suppliers }: Props) {
   const problem = mutation.error ? mutation.error.message : null;
   return (
     <form
+      ref={form}
       noValidate
       className="flex flex-col gap-6"
       onSubmit={(e) => {

@@ -3,7 +3,7 @@ import type { FinishSummary } from "@/db/queries/finish-dto";
 import { Figure, Money, Swatch, Td, Tr } from "@/components/ui";
 import { finishCategoryLabels } from "@/lib/validation/finish";
 import { CautionTitles } from "./caution-titles";
-import { formatDays, lrvSourceShort, lrvSourceWords } from "./library-words";
+import { describeUnit, formatDays, lrvSourceShort, lrvSourceWords } from "./library-words";
 
 /** One table row per finish (wide screens). */
 export function FinishRows({ items }: { items: FinishSummary[] }) {
@@ -24,7 +24,7 @@ export function FinishRows({ items }: { items: FinishSummary[] }) {
       <Td>{f.surface ?? "—"}</Td>
       <Td numeric>
         <Money cents={f.unitPriceCents} />
-        <span className="block text-stone-600">per {f.unit}</span>
+        <span className="block text-stone-600">{describeUnit(f.unit)}</span>
       </Td>
       <Td numeric>{formatDays(f.leadTimeDays)}</Td>
       <Td numeric>
@@ -57,7 +57,7 @@ export function FinishCards({ items }: { items: FinishSummary[] }) {
               {[f.productCode, f.surface].filter(Boolean).join(" · ")}
             </span>
             <span className="figures">
-              <Money cents={f.unitPriceCents} /> per {f.unit} · {formatDays(f.leadTimeDays)} · LRV <Figure value={f.lrv} digits={Number.isInteger(f.lrv) ? 0 : 1} /> ({lrvSourceWords[f.lrvSource]})
+              <Money cents={f.unitPriceCents} /> {describeUnit(f.unit)} · {formatDays(f.leadTimeDays)} · LRV <Figure value={f.lrv} digits={Number.isInteger(f.lrv) ? 0 : 1} /> ({lrvSourceWords[f.lrvSource]})
             </span>
             {f.archived && <span className="text-stone-600">Archived</span>}
             {f.cautions.length > 0 && (

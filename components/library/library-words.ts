@@ -19,3 +19,8 @@ export const colourSourceWords: Record<ColourSource, string> = {
 export function formatDays(days: number): string {
   return days === 1 ? "1 day" : `${days} days`;
 }
+
+/** "per m²", "per L", but "each" rather than "per each". */
+export function describeUnit(unit: string): string {
+  return unit.trim().toLowerCase() === "each" ? "each" : `per ${unit}`;
+}
