@@ -3,6 +3,8 @@ import { staticSecurityHeaders } from "./lib/security-headers";
 
 const nextConfig: NextConfig = {
   poweredByHeader: false,
+  // Browser tests and screenshots reach dev servers at 127.0.0.1 as well as localhost.
+  allowedDevOrigins: ["127.0.0.1"],
   // Lets two servers of one checkout run side by side (a dev server while tests use the build).
   distDir: process.env.NEXT_DIST_DIR ?? ".next",
   async headers() {

@@ -26,23 +26,13 @@ async function growLibrary(count: number) {
   client.close();
 }
 
-async function timed(fn: () => Promise<{ status: number }>): Promise<number> {
-  const runs: number[] = [];
-  for (let i = 0; i < 5; i++) {
-    const start = performance.now();
-    expect((await fn()).status).toBe(200);
-    runs.push(performance.now() - start);
-  }
-  return runs.sort((a, b) => a - b)[2] ?? Infinity;
-}
 
 describe("the library at 10,000 finishes", () => {
   beforeAll(async () => {
     await growLibrary(10_000);
   }, 60_000);
 
-  // Budgets are generous for a shared CI machine; on a laptop these run in single-digit ms.
-  // [common practice: a table that answers within ~100 ms feels immediate]
+  // Correctness at size only: speed is measured by `npm run bench`, never by a timed test.
   it.each([
     ["the first page by name", "?page=1"],
     ["a deep page", "?page=150"],
@@ -50,9 +40,10 @@ describe("the library at 10,000 finishes", () => {
     ["a supplier and text", "?supplier=demo-supplier-tiles&q=walnut"],
     ["text across name, code and supplier", "?q=SC-0999"],
     ["sorted by LRV", "?sort=lrv&dir=desc&page=40"],
-  ])("answers %s quickly (median of 5 under 150 ms)", async (_what, query) => {
-    const ms = await timed(() => call("designer", list, `/api/finishes${query}`));
-    expect(ms).toBeLessThan(150);
+  ])("answers %s with a page of finishes", async (_what, query) => {
+    const res = await call("designer", list, `/api/finishes${query}`);
+    expect(res.status).toBe(200);
+    expect(Array.isArray(res.body.items)).toBe(true);
   });
 
   it("counts them all", async () => {
@@ -60,11 +51,9 @@ describe("the library at 10,000 finishes", () => {
     expect(res.body.total).toBeGreaterThan(10_000);
   });
 
-  it("finds similar colours quickly once the index is built, and the index follows changes", async () => {
+  it("finds similar colours among them, nearest first", async () => {
     const first = await call("designer", similar, "/api/finishes/scale-7/similar?maxDeltaE=3", { params: { finishId: "scale-7" } });
     expect(first.status).toBe(200);
-    const ms = await timed(() => call("designer", similar, "/api/finishes/scale-7/similar?maxDeltaE=3", { params: { finishId: "scale-7" } }));
-    expect(ms).toBeLessThan(100);
     const items = first.body.items as { deltaE: number }[];
     expect(items.length).toBeGreaterThan(0);
     expect(items.every((h, i) => h.deltaE <= 3 && (i === 0 || (items[i - 1]?.deltaE ?? 0) <= h.deltaE))).toBe(true);

@@ -152,7 +152,7 @@ export const expectations: Record<string, Expectation> = {
   "PATCH /api/revisions/[revisionId]": { path: "/api/revisions/demo-revision-a", expect: all(405) },
   "PUT /api/revisions/[revisionId]": { path: "/api/revisions/demo-revision-a", expect: all(405) },
   "DELETE /api/revisions/[revisionId]": { path: "/api/revisions/demo-revision-a", expect: all(405) },
-  "GET /api/revisions/[revisionId]/export.csv": { path: "/api/revisions/demo-revision-a/export.csv?supplier=demo-supplier-stone", expect: { ...staffRead, stone: 200, joinery: 404 } },
+  "GET /api/revisions/[revisionId]/export.csv": { path: "/api/revisions/demo-revision-a/export.csv?supplier=demo-supplier-stone", expect: { ...staffRead, otherclient: 404, stone: 200, joinery: 404 } },
   "POST /api/revisions/[revisionId]/acknowledge": { path: "/api/revisions/demo-revision-a/acknowledge", expect: { ...staffRead, owner: 403, designer: 403, other: 403, stone: 200, joinery: 404 } },
   "PATCH /api/revisions/[revisionId]/lines/[lineId]": { path: "/api/revisions/demo-revision-a/lines/demo-spec-line-a-5", expect: { ...staffRead, owner: 403, designer: 403, other: 403, stone: 200, joinery: 404 } },
   "PUT /api/revisions/[revisionId]/lines/[lineId]": { path: "/api/revisions/demo-revision-a/lines/demo-spec-line-a-5", expect: all(405) },
