@@ -23,7 +23,7 @@ export const optionLineSchema = z.object({
     .number({ error: "Enter a quantity." })
     .positive("The quantity must be more than zero.")
     .max(100_000, "The quantity looks too large."),
-  unit: z.string({ error: "Enter a unit (m², each, lm…)." }).trim().min(1, "Enter a unit (m², each, lm…).").max(20, "Keep the unit short."),
+  unit: z.string({ error: "Enter a unit." }).trim().min(1, "Enter a unit.").max(20, "Keep the unit short."),
   location: optionalText(80),
 });
 
