@@ -139,6 +139,12 @@ describe("GET /api/finishes/export", () => {
     expect((await call(persona, exportCsv, "/api/finishes/export")).status).toBe(status);
   });
 
+  it("gives the owner the same file", async () => {
+    const res = await call("owner", exportCsv, "/api/finishes/export");
+    expect(res.status).toBe(200);
+    expect(res.bytes.toString("utf8").split("\n")[0]).toMatch(/^name,category,supplier,product_code,finish,format,unit,unit_price,lead_time_days,colour,lrv,cautions,care_notes,hex,lrv_used,lrv_source,colour_source,archived,id/);
+  });
+
   it("gives another studio only its own finishes", async () => {
     const res = await call("other", exportCsv, "/api/finishes/export");
     const rows = parse(res.bytes.toString("utf8"), { columns: true }) as Record<string, string>[];

@@ -182,6 +182,12 @@ describe("GET /api/finishes/:id", () => {
 });
 
 describe("PATCH /api/finishes/:id", () => {
+  it("lets the owner edit too", async () => {
+    const res = await one("owner", finishId("basalt-night"), { method: "PATCH", json: { careNotes: "Seal before use." } });
+    expect(res.status).toBe(200);
+    expect(res.body.careNotes).toBe("Seal before use.");
+  });
+
   it("changes the fields given and leaves the rest", async () => {
     const res = await one("designer", finishId("basalt-night"), { method: "PATCH", json: { unitPriceCents: 76000, leadTimeDays: 28 } });
     expect(res.status).toBe(200);
