@@ -33,17 +33,40 @@ describe("the library at 10,000 finishes", () => {
   }, 60_000);
 
   // Correctness at size only: speed is measured by `npm run bench`, never by a timed test.
-  it.each([
-    ["the first page by name", "?page=1"],
-    ["a deep page", "?page=150"],
-    ["a category", "?category=tile&sort=price&dir=desc"],
-    ["a supplier and text", "?supplier=demo-supplier-tiles&q=walnut"],
-    ["text across name, code and supplier", "?q=SC-0999"],
-    ["sorted by LRV", "?sort=lrv&dir=desc&page=40"],
-  ])("answers %s with a page of finishes", async (_what, query) => {
+  type Item = { id: string; name: string; category: string; supplierName: string | null; productCode: string | null; unitPriceCents: number; lrv: number };
+  const page = async (query: string) => {
     const res = await call("designer", list, `/api/finishes${query}`);
     expect(res.status).toBe(200);
-    expect(Array.isArray(res.body.items)).toBe(true);
+    return res.body as { items: Item[]; total: number };
+  };
+  const ordered = (values: number[], dir: 1 | -1) => values.every((v, i) => i === 0 || dir * (v - (values[i - 1] ?? 0)) >= 0);
+
+  it("pages through them all by name without repeats", async () => {
+    const first = await page("?page=1");
+    const deep = await page("?page=150");
+    expect(first.items).toHaveLength(50);
+    expect(deep.items).toHaveLength(50);
+    const names = [...first.items, ...deep.items].map((f) => f.name.toLowerCase());
+    expect(names).toEqual([...names].sort());
+    expect(new Set([...first.items, ...deep.items].map((f) => f.id)).size).toBe(100);
+  });
+
+  it("filters a category and sorts it by price, or the whole library by LRV", async () => {
+    const tiles = await page("?category=tile&sort=price&dir=desc");
+    expect(tiles.total).toBeGreaterThan(1_000);
+    expect(tiles.items.every((f) => f.category === "tile")).toBe(true);
+    expect(ordered(tiles.items.map((f) => f.unitPriceCents), -1)).toBe(true);
+    const byLrv = await page("?sort=lrv&dir=desc&page=40");
+    expect(byLrv.items).toHaveLength(50);
+    expect(ordered(byLrv.items.map((f) => f.lrv), -1)).toBe(true);
+  });
+
+  it("matches text in codes and names within a supplier", async () => {
+    // SC-09990 … SC-09999: ten codes start with "SC-0999".
+    expect((await page("?q=SC-0999")).items.map((f) => f.productCode).sort()).toEqual(Array.from({ length: 10 }, (_, i) => `SC-0999${i}`));
+    const walnutTiles = await page("?supplier=demo-supplier-tiles&q=walnut");
+    expect(walnutTiles.total).toBeGreaterThan(0);
+    expect(walnutTiles.items.every((f) => f.supplierName === "Kiln Lane Tiles & Bathware" && /walnut/i.test(f.name))).toBe(true);
   });
 
   it("counts them all", async () => {
