@@ -144,7 +144,7 @@ export const expectations: Record<string, Expectation> = {
   "POST /api/projects/[projectId]/fixed-items": { path: "/api/projects/demo-project-marrow/fixed-items", expect: staffWrite },
   "PATCH /api/projects/[projectId]/fixed-items/[fixedItemId]": { path: "/api/projects/demo-project-marrow/fixed-items/demo-fixed-oven", expect: { ...staffWrite, owner: 200, designer: 200 } },
   "DELETE /api/projects/[projectId]/fixed-items/[fixedItemId]": { path: "/api/projects/demo-project-marrow/fixed-items/demo-fixed-no-such", expect: { ...staffWrite, owner: 404, designer: 404 } },
-  "GET /api/projects/[projectId]/revisions": { path: "/api/projects/demo-project-marrow/revisions", expect: { ...staffRead, stone: 200, joinery: 200 } },
+  "GET /api/projects/[projectId]/revisions": { path: "/api/projects/demo-project-marrow/revisions", expect: { ...staffRead, otherclient: 404, stone: 200, joinery: 200 } },
   // Issuing needs no body, so it is tried on the other studio's project, whose specification is
   // empty: its own designer gets 409 (nothing to issue) and the demo project stays as it was.
   "POST /api/projects/[projectId]/revisions": { path: "/api/projects/demo-project-quarry/revisions", expect: { owner: 404, designer: 404, other: 409, client: 403, otherclient: 403, stone: 403, joinery: 403, anonymous: 401 } },

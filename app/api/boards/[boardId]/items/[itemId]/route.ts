@@ -21,6 +21,7 @@ export const PATCH = route(async (request: Request, { params }: Params) => {
 export const DELETE = route(async (request: Request, { params }: Params) => {
   const actor = await requireApiUser("designer");
   const { boardId, itemId } = await params;
+  await openBoard(actor, boardId, "edit");
   await removeBoardItem(actor, boardId, itemId, await readDeleteVersion(request));
   return respondWithBoard(actor, boardId, request);
 });

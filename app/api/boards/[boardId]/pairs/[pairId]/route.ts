@@ -20,6 +20,7 @@ export const PATCH = route(async (request: Request, { params }: Params) => {
 export const DELETE = route(async (request: Request, { params }: Params) => {
   const actor = await requireApiUser("designer");
   const { boardId, pairId } = await params;
+  await openBoard(actor, boardId, "edit");
   await removeBoardPair(actor, boardId, pairId, await readDeleteVersion(request));
   return respondWithBoard(actor, boardId, request);
 });
