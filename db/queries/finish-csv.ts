@@ -2,6 +2,7 @@ import { parse } from "csv-parse/sync";
 import { stringify } from "csv-stringify/sync";
 import { and, asc, eq, isNotNull } from "drizzle-orm";
 import { db } from "@/db";
+import { writeTransaction } from "./serial-write";
 import { finishes, suppliers } from "@/db/schema";
 import { HttpError } from "@/lib/http";
 import { roundLab, settleColour } from "@/lib/validation/finish-colour";
@@ -117,7 +118,7 @@ export async function importFinishesCsv(actor: Actor, text: string, dryRun: bool
     const [labL, labA, labB] = settled.lab;
     return { ...fields, supplierId, studioId, labL, labA, labB, colourSource: settled.colourSource, lrv: settled.lrv, lrvSource: settled.lrvSource };
   });
-  await db.transaction(async (tx) => {
+  await writeTransaction(async (tx) => {
     for (let i = 0; i < values.length; i += 500) await tx.insert(finishes).values(values.slice(i, i + 500));
     await writeAudit({ studioId, actorId: actor.userId, action: "finish.imported", entityType: "studio", entityId: studioId, detail: { rows: values.length } }, tx);
   });

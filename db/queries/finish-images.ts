@@ -1,5 +1,6 @@
 import { and, eq, sql, type SQL } from "drizzle-orm";
 import { db } from "@/db";
+import { writeTransaction } from "./serial-write";
 import { images, type Image } from "@/db/schema";
 import { isStaffOfStudio } from "@/lib/auth/permissions";
 import { notFound } from "@/lib/http";
@@ -18,7 +19,7 @@ export async function saveUploadedPhoto(actor: Actor, kind: ImageKind, photo: Pr
   const studioId = requireStudioId(actor);
   const storageKey = createStorageKey(kind);
   try {
-    return await db.transaction(async (tx) => {
+    return await writeTransaction(async (tx) => {
       const [image] = await tx
         .insert(images)
         .values({ studioId, uploadedBy: actor.userId, storageKey, width: photo.width, height: photo.height, bytes: photo.original.byteLength })

@@ -1,5 +1,6 @@
 import { and, eq, getTableColumns, sql } from "drizzle-orm";
 import { db } from "@/db";
+import { writeTransaction } from "./serial-write";
 import { boardItems, finishes, fixedItems, images, optionLines, specLines, suppliers, type NewFinish } from "@/db/schema";
 import { forbidden, HttpError, notFound } from "@/lib/http";
 import { imageUrl } from "@/lib/uploads/urls";
@@ -80,7 +81,7 @@ export async function createFinish(actor: Actor, input: FinishInput): Promise<Fi
   const settled = settleColour(input.colour, input.lrv ?? null);
   if (!settled) throw needsLrv();
   const { colour: _colour, lrv: _lrv, ...fields } = input;
-  const id = await db.transaction(async (tx) => {
+  const id = await writeTransaction(async (tx) => {
     const [row] = await tx
       .insert(finishes)
       .values({
@@ -124,7 +125,7 @@ export async function updateFinish(actor: Actor, finishId: string, patch: Finish
   if (archived !== undefined && archived !== (existing.archivedAt !== null)) values.archivedAt = archived ? new Date() : null;
   if (Object.keys(values).length === 0) return getFinish(actor, finishId);
   const action = archived === true ? "finish.archived" : archived === false ? "finish.restored" : "finish.updated";
-  await db.transaction(async (tx) => {
+  await writeTransaction(async (tx) => {
     await tx.update(finishes).set(values).where(and(eq(finishes.id, finishId), eq(finishes.studioId, studioId)));
     await writeAudit({ studioId, actorId: actor.userId, action, entityType: "finish", entityId: finishId, detail: { fields: Object.keys(values) } }, tx);
   });
@@ -147,7 +148,7 @@ export async function deleteFinish(actor: Actor, finishId: string): Promise<void
   const studioId = requireStudioId(actor);
   const existing = await findOwnFinish(studioId, finishId);
   // Checked inside the write transaction, so nothing can start using it between check and delete.
-  await db.transaction(async (tx) => {
+  await writeTransaction(async (tx) => {
     const block = describeRemovalBlock(await countFinishUsage(finishId, tx));
     if (block) throw new HttpError(409, block);
     await tx.delete(finishes).where(and(eq(finishes.id, finishId), eq(finishes.studioId, studioId)));

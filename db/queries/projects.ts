@@ -1,5 +1,6 @@
 import { and, asc, eq, inArray, isNull, or, sql } from "drizzle-orm";
 import { db } from "@/db";
+import { writeTransaction } from "./serial-write";
 import { projectMembers, projects, rooms, studioMembers, suppliers, users } from "@/db/schema";
 import { projectRole } from "@/lib/auth/permissions";
 import { conflict, forbidden, HttpError, notFound } from "@/lib/http";
@@ -78,7 +79,7 @@ export async function addProjectMember(actor: Actor, projectId: string, input: I
     });
     if (!supplier) throw new HttpError(400, "Choose one of your studio's suppliers.", { supplierId: ["Choose one of your studio's suppliers."] });
   }
-  return db.transaction(async (tx) => {
+  return writeTransaction(async (tx) => {
     let user = await tx.query.users.findFirst({ where: eq(users.email, input.email) });
     if (user && (await isStudioStaff(tx, user.id))) {
       throw conflict("That e-mail address belongs to studio staff; staff see projects through their studio.");
@@ -125,7 +126,7 @@ async function isStudioStaff(tx: Tx, userId: string) {
 export async function createProject(actor: Actor, input: CreateProjectInput) {
   const studioId = actor.studio?.id;
   if (!studioId) throw forbidden();
-  return db.transaction(async (tx) => {
+  return writeTransaction(async (tx) => {
     const [project] = await tx
       .insert(projects)
       .values({ studioId, name: input.name, siteAddress: input.siteAddress || null, installDate: input.installDate || null })

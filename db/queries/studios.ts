@@ -1,6 +1,7 @@
 import bcrypt from "bcryptjs";
 import { and, asc, eq } from "drizzle-orm";
 import { db } from "@/db";
+import { writeTransaction } from "./serial-write";
 import { studioMembers, studios, suppliers, users } from "@/db/schema";
 import { conflict } from "@/lib/http";
 import type { SignUpInput } from "@/lib/validation/auth";
@@ -13,7 +14,7 @@ export async function createStudioWithOwner(input: SignUpInput) {
   const existing = await db.query.users.findFirst({ where: eq(users.email, input.email) });
   if (existing) throw conflict("That e-mail address already has an account. Sign in instead.");
   const passwordHash = await bcrypt.hash(input.password, PASSWORD_COST);
-  return db.transaction(async (tx) => {
+  return writeTransaction(async (tx) => {
     const [studio] = await tx.insert(studios).values({ name: input.studioName }).returning();
     const [user] = await tx.insert(users).values({ email: input.email, name: input.name, passwordHash }).returning();
     if (!studio || !user) throw new Error("sign-up insert returned nothing");
@@ -28,7 +29,7 @@ export async function createStudioWithOwner(input: SignUpInput) {
 
 /** Adds a designer to the studio; the person signs in with an e-mailed link. */
 export async function addDesigner(studioId: string, invitedBy: string, input: { email: string; name: string }) {
-  return db.transaction(async (tx) => {
+  return writeTransaction(async (tx) => {
     let user = await tx.query.users.findFirst({ where: eq(users.email, input.email) });
     if (user) {
       const staff = await tx.query.studioMembers.findFirst({ where: eq(studioMembers.userId, user.id) });
