@@ -1,3 +1,5 @@
+import { notFound } from "next/navigation";
+import { isDevLike } from "@/lib/env";
 import type { Metadata } from "next";
 import {
   Badge,
@@ -55,6 +57,8 @@ const paletteShown: PaletteName[] = [
 ];
 
 export default function StyleCheckPage() {
+  // The living style guide: for people building Mottle, not part of the product in production.
+  if (!isDevLike) notFound();
   const nameHint = "As the client will see it.";
   const nameError = "Give the board a name.";
   const codeErrors = ["A product code has letters, a dash and digits, e.g. SB-204.", "That code is already in your library."];
