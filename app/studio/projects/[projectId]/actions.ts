@@ -2,7 +2,7 @@
 
 import { revalidatePath } from "next/cache";
 import { headers } from "next/headers";
-import { addProjectMember } from "@/db/queries/projects";
+import { addProjectMember, getProjectForStaff } from "@/db/queries/projects";
 import { failure, formValues, type ActionResult } from "@/lib/actions/result";
 import { requireApiUser } from "@/lib/auth/session";
 import { invitationMessage } from "@/lib/mail/messages";
@@ -12,6 +12,7 @@ import { inviteToProjectSchema } from "@/lib/validation/auth";
 export async function inviteToProjectAction(projectId: string, _prev: ActionResult, form: FormData): Promise<ActionResult> {
   try {
     const actor = await requireApiUser("designer");
+    await getProjectForStaff(actor, projectId);
     const input = inviteToProjectSchema.parse(formValues(form));
     const { project, user } = await addProjectMember(actor, projectId, input);
     const origin = (await headers()).get("origin") ?? undefined;

@@ -8,6 +8,7 @@ import { failure, formValues, type ActionResult } from "@/lib/actions/result";
 import { requireApiUser } from "@/lib/auth/session";
 import { issueRevisionAndNotify } from "@/lib/spec/notify";
 import { fixedItemSchema } from "@/lib/validation/spec";
+import { getProjectForStaff } from "@/db/queries/projects";
 
 const specPath = (projectId: string) => `/studio/projects/${projectId}/specification`;
 
@@ -16,6 +17,7 @@ export async function issueRevisionAction(projectId: string, _prev: ActionResult
   let revisionId: string;
   try {
     const actor = await requireApiUser("designer");
+    await getProjectForStaff(actor, projectId);
     const origin = (await headers()).get("origin") ?? undefined;
     const issued = await issueRevisionAndNotify(actor, projectId, origin);
     revisionId = issued.revision.id;
@@ -31,6 +33,7 @@ export async function issueRevisionAction(projectId: string, _prev: ActionResult
 export async function saveFixedItemAction(projectId: string, fixedItemId: string | null, _prev: ActionResult, form: FormData): Promise<ActionResult> {
   try {
     const actor = await requireApiUser("designer");
+    await getProjectForStaff(actor, projectId);
     const input = fixedItemSchema.parse(formValues(form));
     if (fixedItemId) await updateFixedItem(actor, projectId, fixedItemId, input);
     else await createFixedItem(actor, projectId, input);
