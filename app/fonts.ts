@@ -1,7 +1,7 @@
 import localFont from "next/font/local";
 
 // Self-hosted from fonts/ (copied from @fontsource-variable, SIL OFL 1.1, licences beside them):
-// the app runs without internet, so next/font/google is not an option.
+// the app runs without internet, so Google-hosted fonts cannot be fetched at build time.
 // Put `${sans.variable} ${display.variable}` on <html>; app/globals.css maps them into Tailwind.
 
 /** Figtree: the interface face. It has true tabular figures, so every number uses it. */

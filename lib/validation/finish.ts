@@ -130,7 +130,7 @@ const always = { when: (payload: { value: unknown }) => typeof payload.value ===
 export const finishInputSchema = z.object(finishFields).superRefine((v, ctx) => checkColour(v, ctx, false), always);
 export type FinishInput = z.infer<typeof finishInputSchema>;
 
-/** PATCH: any subset of the fields, plus archiving. */
+/** PATCH: some or all of the fields, plus archiving. */
 export const finishPatchSchema = z
   // No default for cautions here: a PATCH that leaves them out must leave them alone.
   .object({ ...finishFields, cautions: cautionList })

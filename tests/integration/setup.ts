@@ -7,7 +7,7 @@ import { startMailCatcher } from "@/lib/mail/catcher";
 /**
  * Each integration test file gets a fresh libSQL file with the migrations applied and the demo
  * studio seeded, its own mail catcher, and a stand-in for the Auth.js session so a test can act
- * as any person (see tests/support/session.ts).
+ * as whichever person it needs (see tests/support/session.ts).
  */
 const dir = mkdtempSync(path.join(tmpdir(), "mottle-it-"));
 const catcher = await startMailCatcher({ port: 0, dir: path.join(dir, "mail") });

@@ -16,7 +16,7 @@ export async function call<P>(handler: Handler<P>, params: P, init: { method?: s
   return { status: res.status, body: text ? (JSON.parse(text) as Record<string, unknown>) : {} };
 }
 
-/** Act as any user id (for people the demo personas don't cover). */
+/** Act as a given user id (for people the demo personas don't cover). */
 export function actAsUser(userId: string) {
   sessionStub.current = { user: { id: userId }, expires: new Date(Date.now() + 3_600_000).toISOString() };
 }

@@ -26,7 +26,7 @@ const all = (o: Outcome): Record<MatrixPersona, Outcome> => ({
 });
 const as = (base: Record<MatrixPersona, Outcome>, changes: Partial<Record<MatrixPersona, Outcome>>) => ({ ...base, ...changes });
 
-/** Studio pages that aren't about one project: any studio's staff. */
+/** Studio pages that aren't about one project: the staff of every studio. */
 export const studioPage = as(all("forbidden"), { owner: "ok", designer: "ok", other: "ok", anonymous: "sign-in" });
 /** Pages of the demo project: its studio's staff; another studio gets 404. */
 export const projectPage = as(studioPage, { other: "not-found" });
@@ -47,7 +47,7 @@ const staffWrite = { ...staffRead, owner: 400, designer: 400 };
 const clientRead = { ...staffRead, client: 200, otherclient: 404 };
 /** Client writes (choose, approve, request): the project's clients get 400 for an empty body. */
 const clientWrite = { owner: 403, designer: 403, other: 403, client: 400, otherclient: 404, stone: 403, joinery: 403, anonymous: 401 };
-/** The studio's own library: any studio's staff see their own; our finish ids are 404 to another studio. */
+/** The studio's own library: each studio's staff see their own; our finish ids are 404 to another studio. */
 const libraryList = { owner: 200, designer: 200, other: 200, client: 403, otherclient: 403, stone: 403, joinery: 403, anonymous: 401 };
 const libraryItem = { ...libraryList, other: 404 };
 const libraryWrite = { ...libraryList, owner: 400, designer: 400, other: 400 };
