@@ -3,6 +3,7 @@ import { db } from "@/db";
 import { lineOrders, projects, specLines, specRevisions, supplierAcknowledgements, users, type Project, type SpecRevision } from "@/db/schema";
 import { projectRole, supplierIdFor } from "@/lib/auth/permissions";
 import { forbidden, notFound } from "@/lib/http";
+import { pickLineContent } from "@/lib/spec/revision-content";
 import type { SpecLineContent } from "@/lib/spec/types";
 import type { Reader } from "./spec-source";
 import type { Actor } from "./users";
@@ -22,21 +23,7 @@ export async function readRevisionLines(reader: Reader, revisionId: string, supp
     .orderBy(asc(specLines.sortOrder), asc(specLines.lineKey));
   return rows.map(({ line, orderedOn, expectedOn, orderedAt }) => ({
     id: line.id,
-    lineKey: line.lineKey,
-    room: line.room,
-    item: line.item,
-    location: line.location,
-    finishId: line.finishId,
-    finishName: line.finishName,
-    supplierId: line.supplierId,
-    supplierName: line.supplierName,
-    productCode: line.productCode,
-    quantity: line.quantity,
-    unit: line.unit,
-    leadTimeDays: line.leadTimeDays,
-    orderByDate: line.orderByDate,
-    cautions: line.cautions,
-    sortOrder: line.sortOrder,
+    ...pickLineContent(line),
     order: orderedAt ? { orderedOn, expectedOn } : null,
   }));
 }
