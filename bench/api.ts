@@ -8,8 +8,9 @@ type Load = { rps: number; p99: number; errors: number };
 export async function measureLoad(
   url: string,
   connections: number,
-  options: { cookie?: string; method?: "GET" | "POST"; body?: string; seconds?: number } = {},
+  options: { cookie?: string; method?: "GET" | "POST"; bodies?: string[]; seconds?: number } = {},
 ): Promise<Load> {
+  // Several bodies are sent in turn on each connection (a client going back and forth between two options).
   const result = await autocannon({
     url,
     connections,
@@ -17,9 +18,9 @@ export async function measureLoad(
     method: options.method ?? "GET",
     headers: {
       ...(options.cookie ? { cookie: options.cookie } : {}),
-      ...(options.body ? { "content-type": "application/json" } : {}),
+      ...(options.bodies ? { "content-type": "application/json" } : {}),
     },
-    body: options.body,
+    requests: options.bodies?.map((body) => ({ method: options.method ?? "GET", body })),
   });
   return { rps: result.requests.average, p99: result.latency.p99, errors: result.errors + result.timeouts + result.non2xx };
 }

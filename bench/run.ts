@@ -1,4 +1,4 @@
-import { mkdtempSync, rmSync } from "node:fs";
+import { existsSync, mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { migrateDatabase } from "../db/migrate";
@@ -15,10 +15,17 @@ import { printTable, type BenchRow } from "./table";
  * `npm run bench`: every benchmark against the production build, one table: our figure, a
  * baseline measured in the same run, the ratio and the target. Never part of `npm test`.
  */
+const args = new Set(process.argv.slice(2));
+/** `--api-only` skips the in-process benchmarks; `--reuse-build` keeps an existing `.next-bench`. */
+const apiOnly = args.has("--api-only");
+const reuseBuild = args.has("--reuse-build") && existsSync(".next-bench/BUILD_ID");
+
 const rows: BenchRow[] = [];
-rows.push(...(await runColourBench()));
-rows.push(...(await runBoardsBench()));
-rows.push(...(await runUploadsBench()));
+if (!apiOnly) {
+  rows.push(...(await runColourBench()));
+  rows.push(...(await runBoardsBench()));
+  rows.push(...(await runUploadsBench()));
+}
 
 const dir = mkdtempSync(path.join(tmpdir(), "mottle-bench-"));
 const databaseUrl = `file:${path.join(dir, "bench.db")}`;
@@ -27,8 +34,10 @@ await seedBenchStudio(db);
 client.close();
 
 const distDir = ".next-bench";
-console.log("Building the production app for the benchmark…");
-await run("npx", ["next", "build"], { ...process.env, NEXT_DIST_DIR: distDir, NEXT_TELEMETRY_DISABLED: "1" });
+if (!reuseBuild) {
+  console.log("Building the production app for the benchmark…");
+  await run("npx", ["next", "build"], { ...process.env, NEXT_DIST_DIR: distDir, NEXT_TELEMETRY_DISABLED: "1" });
+}
 const { base, child } = await startBenchServer(distDir, databaseUrl, path.join(dir, "uploads"));
 try {
   const designer = await sessionCookie("bench-user-designer", "designer@bench.example");
@@ -41,10 +50,15 @@ try {
   rows.push({ measure: "baseline /api/health: req/s at 50, p99 at 10", ours: `${baseline50.rps.toFixed(0)} req/s`, baseline: "–", ratio: "–", target: "–", met: "–" });
   rows.push({ measure: "baseline /api/health: p99 at 10 connections", ours: `${baseline10.p99} ms`, baseline: "–", ratio: "–", target: "–", met: "–" });
 
-  const endpoints: [string, string, string, { method?: "POST"; body?: string }][] = [
+  const endpoints: [string, string, string, { method?: "POST"; bodies?: string[] }][] = [
     ["GET board with checks", `${base}/api/boards/bench-board-0`, designer, {}],
     ["GET finish table page 1, filtered", `${base}/api/finishes?category=stone&page=1`, designer, {}],
-    ["POST client choice", `${base}/api/decisions/bench-decision-0-0/choice`, clientCookie, { method: "POST", body: JSON.stringify({ optionId: "bench-option-0-0-1" }) }],
+    // Back and forth between two options, each pick with a comment, so every request is a real
+    // write and an e-mail (picking the same option again with nothing to say writes nothing).
+    ["POST client choice", `${base}/api/decisions/bench-decision-0-0/choice`, clientCookie, {
+      method: "POST",
+      bodies: ["bench-option-0-0-1", "bench-option-0-0-2"].map((optionId) => JSON.stringify({ optionId, comment: "Still weighing these two." })),
+    }],
   ];
   for (const [name, url, cookie, extra] of endpoints) {
     await warm(url, cookie);

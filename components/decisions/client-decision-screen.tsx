@@ -124,7 +124,7 @@ export function ClientDecisionScreen({ initial, justLocked, today }: Props) {
       )}
 
       <Section title="Picks and notes" level={2}>
-        <ChoiceHistory choices={view.choices} viewerId={view.viewer.id} />
+        <ChoiceHistory choices={view.choices} earlier={view.earlierChoiceCount} viewerId={view.viewer.id} />
       </Section>
 
       <BudgetSummary budget={view.budget} heading="Your project's running total" />

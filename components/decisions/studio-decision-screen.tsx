@@ -77,7 +77,7 @@ export function StudioDecisionScreen({ initial, today }: { initial: DecisionView
       </div>
 
       <Section title="Picks and notes from the clients">
-        <ChoiceHistory choices={view.choices} viewerId={view.viewer.id} />
+        <ChoiceHistory choices={view.choices} earlier={view.earlierChoiceCount} viewerId={view.viewer.id} />
       </Section>
       {view.approvals.length > 0 && (
         <Section title="Approvals" description="Exactly what each approver was shown, as recorded at the time.">

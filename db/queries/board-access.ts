@@ -27,8 +27,8 @@ export async function openProjectForBoards(actor: Actor, projectId: string, mode
   return { project, access };
 }
 
-/** A board with its project, room and the studio's check settings, or 404/403 as above. */
-export async function openBoard(actor: Actor, boardId: string, mode: BoardMode) {
+/** A board with its project, room and the studio's check settings, whoever asks; 404 if there is none. */
+export async function readBoardHead(boardId: string) {
   const [row] = await db
     .select({ board: boards, project: projects, room: rooms, checkSettings: studios.checkSettings })
     .from(boards)
@@ -38,8 +38,18 @@ export async function openBoard(actor: Actor, boardId: string, mode: BoardMode) 
     .where(eq(boards.id, boardId))
     .limit(1);
   if (!row) throw notFound("That board");
-  const access = checkRole(projectRole(actor, row.project.id, row.project.studioId), mode, "That board");
-  return { ...row, access };
+  return row;
+}
+
+/** What this person may do with a board of this project, or 404/403 as above. */
+export function boardAccess(actor: Actor, project: { id: string; studioId: string }, mode: BoardMode) {
+  return checkRole(projectRole(actor, project.id, project.studioId), mode, "That board");
+}
+
+/** A board with its project, room and the studio's check settings, or 404/403 as above. */
+export async function openBoard(actor: Actor, boardId: string, mode: BoardMode) {
+  const row = await readBoardHead(boardId);
+  return { ...row, access: boardAccess(actor, row.project, mode) };
 }
 
 /** The thresholds this studio's checks use: its own settings over the defaults. */

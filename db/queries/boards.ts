@@ -4,19 +4,32 @@ import { boards, rooms } from "@/db/schema";
 import { computeBoardChecks, countVerdicts, tintForLight } from "@/lib/boards/board-checks";
 import { resolveThresholds } from "@/lib/boards/check-settings";
 import { DAYLIGHT } from "@/lib/boards/lights";
-import type { BoardList, BoardSummary } from "@/lib/boards/types";
+import type { BoardList, BoardSummary, BoardView } from "@/lib/boards/types";
 import { assembleBoardView } from "@/lib/boards/view";
 import { HttpError } from "@/lib/http";
 import type { CreateBoardInput } from "@/lib/validation/board";
 import { writeAudit } from "./audit";
-import { getStudioThresholds, openBoard, openProjectForBoards } from "./board-access";
+import { boardAccess, getStudioThresholds, openProjectForBoards, readBoardHead } from "./board-access";
 import { readItemRows, readPairRows } from "./board-rows";
 import { runBoardWrite } from "./board-version";
+import { readCache } from "./read-cache";
 import type { Actor } from "./users";
 
-/** The board with its items, pairs and checks under one light (daylight unless told). */
-export async function getBoardView(actor: Actor, boardId: string, cct: number = DAYLIGHT.cct) {
-  const { board, project, room, access, checkSettings } = await openBoard(actor, boardId, "read");
+const boardHeads = readCache<Awaited<ReturnType<typeof readBoardHead>>>("board-head", 5000);
+const boardViews = readCache<BoardView>("board-view", 500);
+
+/**
+ * The board with its items, pairs and checks under one light (daylight unless told). Who may see
+ * it is decided on every call; the view itself is cached per light and access until the next
+ * write (read-cache.ts).
+ */
+export async function getBoardView(actor: Actor, boardId: string, cct: number = DAYLIGHT.cct): Promise<BoardView> {
+  const head = await boardHeads(boardId, () => readBoardHead(boardId));
+  const access = boardAccess(actor, head.project, "read");
+  return boardViews(`${boardId}|${cct}|${access}`, () => assembleFromHead(head, cct, access));
+}
+
+async function assembleFromHead({ board, project, room, checkSettings }: Awaited<ReturnType<typeof readBoardHead>>, cct: number, access: "edit" | "read") {
   const [items, pairs] = await Promise.all([readItemRows([board.id]), readPairRows([board.id])]);
   const { thresholds, settingsIgnored } = resolveThresholds(checkSettings);
   return assembleBoardView({

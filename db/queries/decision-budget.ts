@@ -1,4 +1,4 @@
-import { and, asc, desc, eq, inArray, isNull, sql } from "drizzle-orm";
+import { and, desc, eq, getTableColumns, inArray, isNull, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { approvals, choices, decisions, options, variations } from "@/db/schema";
 import { summariseBudget, type BudgetDecision } from "@/lib/decisions/budget";
@@ -8,14 +8,14 @@ type Reader = Pick<typeof db, "select">;
 /** Latest choice per decision (ties on the millisecond broken by insertion order). */
 export async function loadLatestChoices(decisionIds: string[], reader: Reader = db) {
   if (decisionIds.length === 0) return new Map<string, typeof choices.$inferSelect>();
+  // One index probe per decision (choice_decision_time_idx), however often a client changed their mind.
+  const newest = sql`(select newest.id from ${choices} newest where newest.decision_id = ${decisions.id} order by newest.created_at desc, newest.rowid desc limit 1)`;
   const rows = await reader
-    .select()
-    .from(choices)
-    .where(inArray(choices.decisionId, decisionIds))
-    .orderBy(asc(choices.createdAt), asc(sql`${choices}.rowid`));
-  const latest = new Map<string, typeof choices.$inferSelect>();
-  for (const row of rows) latest.set(row.decisionId, row);
-  return latest;
+    .select(getTableColumns(choices))
+    .from(decisions)
+    .innerJoin(choices, eq(choices.id, newest))
+    .where(inArray(decisions.id, decisionIds));
+  return new Map(rows.map((row) => [row.decisionId, row]));
 }
 
 /**

@@ -30,11 +30,19 @@ async function findOfferedOption(tx: Tx, decisionId: string, optionId: string) {
   return option;
 }
 
-/** The client picks (or changes their mind, or comments on) an option. Not an approval. */
+/**
+ * The client picks (or changes their mind, or comments on) an option. Not an approval.
+ * Picking again what they already picked, with nothing to say, changes nothing: a double click
+ * or a retried request adds no line to the history and no e-mail (`changed: false`).
+ */
 export async function chooseOption(actor: Actor, decisionId: string, input: ChoiceInput) {
   return writeTransaction(async (tx) => {
     const { decision, project } = await openForClient(tx, actor, decisionId, input.version);
     const option = await findOfferedOption(tx, decision.id, input.optionId);
+    const latest = (await loadLatestChoices([decision.id], tx)).get(decision.id);
+    if (decision.status === "chosen" && !input.comment && latest?.optionId === option.id && latest.userId === actor.userId) {
+      return { decision, project, option, choice: latest, changed: false };
+    }
     const [updated] = await tx
       .update(decisions)
       .set({ status: "chosen", version: decision.version + 1 })
@@ -57,7 +65,7 @@ export async function chooseOption(actor: Actor, decisionId: string, input: Choi
       },
       tx,
     );
-    return { decision: updated, project, option, choice };
+    return { decision: updated, project, option, choice, changed: true };
   });
 }
 

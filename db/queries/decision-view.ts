@@ -1,4 +1,4 @@
-import { asc, desc, eq, sql } from "drizzle-orm";
+import { asc, count, desc, eq, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/sqlite-core";
 import { db } from "@/db";
 import { approvals, choices, rooms, users, variations } from "@/db/schema";
@@ -15,6 +15,9 @@ const person = (id: string | null, name: string | null, email: string | null): P
   id ? { id, name: name ?? email ?? "Someone" } : null;
 const iso = (d: Date | null) => (d ? d.toISOString() : null);
 
+/** The newest picks a decision screen lists; older ones are counted, and stay in the audit log. */
+export const CHOICES_SHOWN = 30;
+
 /** Everything a decision screen shows, for the project's staff or its clients. */
 export async function getDecisionView(actor: Actor, decisionId: string): Promise<DecisionView> {
   return buildDecisionView(actor, await getDecisionAccess(actor, decisionId));
@@ -24,14 +27,16 @@ export async function buildDecisionView(actor: Actor, access: DecisionAccess, re
   const { decision: d, project, role } = access;
   const thresholds = await getStudioThresholds(project.studioId, reader);
   const [room] = await reader.select({ name: rooms.name }).from(rooms).where(eq(rooms.id, d.roomId));
-  const [optionViews, choiceRows, approvalRows, variationRows, orderBy, budgetRows, needsRevision] = await Promise.all([
+  const [optionViews, choiceRows, [choiceCount], approvalRows, variationRows, orderBy, budgetRows, needsRevision] = await Promise.all([
     loadOptionViews(d, thresholds, reader),
     reader
       .select({ choice: choices, name: users.name, email: users.email })
       .from(choices)
       .innerJoin(users, eq(users.id, choices.userId))
       .where(eq(choices.decisionId, d.id))
-      .orderBy(desc(choices.createdAt), desc(sql`${choices}.rowid`)),
+      .orderBy(desc(choices.createdAt), desc(sql`${choices}.rowid`))
+      .limit(CHOICES_SHOWN),
+    reader.select({ total: count() }).from(choices).where(eq(choices.decisionId, d.id)),
     reader
       .select({ approval: approvals, name: users.name, email: users.email })
       .from(approvals)
@@ -81,6 +86,7 @@ export async function buildDecisionView(actor: Actor, access: DecisionAccess, re
     // Once locked, the pick that matters is the approval; the history stays readable.
     currentChoice: d.status === "locked" ? null : (choiceViews[0] ?? null),
     choices: choiceViews,
+    earlierChoiceCount: Math.max(0, (choiceCount?.total ?? 0) - choiceViews.length),
     approvals: approvalViews,
     variations: variationRows.map((v) => ({ ...v, optionLabel: v.optionId ? labelOf(v.optionId) : null })),
     budget: summariseBudget([...budgetRows.values()]),

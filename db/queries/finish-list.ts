@@ -3,6 +3,7 @@ import { db } from "@/db";
 import { finishes, suppliers } from "@/db/schema";
 import type { FinishListQuery, FinishSortKey } from "@/lib/validation/finish";
 import { toFinishSummary, type FinishPage } from "./finish-dto";
+import { readCache } from "./read-cache";
 
 /** LIKE pattern for text typed by a person: % and _ are literal, matched anywhere, any case (ASCII). */
 function containing(text: string): string {
@@ -40,7 +41,14 @@ function orderFor(sort: FinishSortKey, dir: "asc" | "desc"): SQL[] {
  * ids and sort keys only (the studio filter uses its index), and just the page's rows are read
  * in full afterwards; the count runs beside it.
  */
-export async function listFinishes(studioId: string, query: FinishListQuery): Promise<FinishPage> {
+export function listFinishes(studioId: string, query: FinishListQuery): Promise<FinishPage> {
+  return finishPages(`${studioId}|${JSON.stringify(query)}`, () => readFinishPage(studioId, query));
+}
+
+/** Pages already read, until the next write (read-cache.ts): a designer paging back and forth, or a team on one library. */
+const finishPages = readCache<FinishPage>("finish-page", 1000);
+
+async function readFinishPage(studioId: string, query: FinishListQuery): Promise<FinishPage> {
   const where = and(
     eq(finishes.studioId, studioId),
     query.status === "current" ? isNull(finishes.archivedAt) : query.status === "archived" ? isNotNull(finishes.archivedAt) : undefined,

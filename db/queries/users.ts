@@ -1,6 +1,7 @@
 import { eq } from "drizzle-orm";
 import { db } from "@/db";
 import { projectMembers, projects, studioMembers, studios, users, type ProjectRole, type StudioRole } from "@/db/schema";
+import { readCache } from "./read-cache";
 
 export async function getUserByEmail(email: string) {
   return db.query.users.findFirst({ where: eq(users.email, email.toLowerCase()) });
@@ -16,8 +17,17 @@ export type Actor = {
   projects: { projectId: string; studioId: string; role: ProjectRole; supplierId: string | null }[];
 };
 
-/** Everything the permission checks need about a signed-in person, read fresh on each request. */
-export async function getActor(userId: string): Promise<Actor | null> {
+const cachedActor = readCache<Actor | null>("actor", 2000);
+
+/**
+ * Everything the permission checks need about a signed-in person. Cached until the next write
+ * (read-cache.ts), so a change of role or membership counts from the very next request.
+ */
+export function getActor(userId: string): Promise<Actor | null> {
+  return cachedActor(userId, () => readActor(userId));
+}
+
+async function readActor(userId: string): Promise<Actor | null> {
   const user = await db.query.users.findFirst({ where: eq(users.id, userId) });
   if (!user) return null;
   const [staff] = await db

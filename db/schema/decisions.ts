@@ -91,7 +91,8 @@ export const choices = sqliteTable(
     comment: text("comment"),
     createdAt: createdAt(),
   },
-  (t) => [index("choice_decision_idx").on(t.decisionId)],
+  // Newest pick of a decision, and a page of its history, straight from the index.
+  (t) => [index("choice_decision_time_idx").on(t.decisionId, t.createdAt)],
 );
 export type Choice = typeof choices.$inferSelect;
 

@@ -1,6 +1,7 @@
 import "server-only";
 import { DrizzleAdapter } from "@auth/drizzle-adapter";
 import NextAuth, { CredentialsSignin } from "next-auth";
+import { cookies } from "next/headers";
 import Credentials from "next-auth/providers/credentials";
 import Nodemailer from "next-auth/providers/nodemailer";
 import { db } from "@/db";
@@ -9,6 +10,7 @@ import { checkPassword } from "@/db/queries/passwords";
 import { getUserByEmail } from "@/db/queries/users";
 import { env } from "@/lib/env";
 import { safeCallback } from "@/lib/auth/callback";
+import { createSessionMemo, sessionToken } from "@/lib/auth/session-memo";
 import { sendMail } from "@/lib/mail/send";
 import { signInLinkMessage } from "@/lib/mail/messages";
 import { signInSchema } from "@/lib/validation/auth";
@@ -81,3 +83,11 @@ export const { handlers, auth, signIn, signOut } = NextAuth({
     },
   },
 });
+
+const globalMemo = globalThis as unknown as { mottleSessionMemo?: ReturnType<typeof createSessionMemo> };
+const sessionMemo = (globalMemo.mottleSessionMemo ??= createSessionMemo(async () => (await auth())?.user?.id ?? null));
+
+/** The signed-in person's id from the session cookie, or null. See session-memo.ts. */
+export async function sessionUserId(): Promise<string | null> {
+  return sessionMemo(sessionToken((await cookies()).getAll()));
+}

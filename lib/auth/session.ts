@@ -4,13 +4,12 @@ import { redirect } from "next/navigation";
 import { cache } from "react";
 import { getActor, type Actor } from "@/db/queries/users";
 import { forbidden, unauthorised } from "@/lib/http";
-import { auth } from "./index";
+import { sessionUserId } from "./index";
 import { isOwner, isStaff } from "./permissions";
 
 /** The signed-in person, read once per request; null when signed out. */
 export const currentActor = cache(async (): Promise<Actor | null> => {
-  const session = await auth();
-  const userId = session?.user?.id;
+  const userId = await sessionUserId();
   return userId ? getActor(userId) : null;
 });
 

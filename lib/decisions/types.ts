@@ -88,7 +88,9 @@ export type DecisionView = {
   viewer: { id: string; role: "staff" | "client" };
   options: OptionView[];
   currentChoice: ChoiceView | null;
+  /** The newest picks first, at most a screenful; `earlierChoiceCount` more are not listed. */
   choices: ChoiceView[];
+  earlierChoiceCount: number;
   approvals: ApprovalView[];
   variations: VariationView[];
   budget: BudgetSummary;

@@ -30,6 +30,7 @@ vi.mock("@/lib/auth", async () => {
   const { sessionStub } = await import("@/tests/support/session");
   return {
     auth: async () => sessionStub.current,
+    sessionUserId: async () => sessionStub.current?.user.id ?? null,
     signIn: async () => undefined,
     signOut: async () => undefined,
     handlers: {},

@@ -15,12 +15,14 @@ export const POST = route(async (request, { params }: Context) => {
   const { decisionId } = await params;
   await getDecisionAccess(actor, decisionId);
   const input = choiceSchema.parse(await readJson(request));
-  const { decision, project, option } = await chooseOption(actor, decisionId, input);
-  await notifyClientChose(
-    project,
-    decision,
-    { clientName: actor.name ?? actor.email, optionLabel: option.label, approved: false },
-    request.headers.get("origin") ?? undefined,
-  );
+  const { decision, project, option, changed } = await chooseOption(actor, decisionId, input);
+  if (changed) {
+    await notifyClientChose(
+      project,
+      decision,
+      { clientName: actor.name ?? actor.email, optionLabel: option.label, approved: false },
+      request.headers.get("origin") ?? undefined,
+    );
+  }
   return NextResponse.json(await getDecisionView(actor, decisionId));
 });
