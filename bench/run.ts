@@ -2,6 +2,7 @@ import { existsSync, mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { migrateDatabase } from "../db/migrate";
+import { startMailCatcher } from "../lib/mail/catcher";
 import { seedBenchStudio } from "../db/seed/bench-studio";
 import { run } from "../scripts/lib/processes";
 import { measureLoad, measurePageJs, rowsForEndpoint } from "./api";
@@ -38,7 +39,9 @@ if (!reuseBuild) {
   console.log("Building the production app for the benchmark…");
   await run("npx", ["next", "build"], { ...process.env, NEXT_DIST_DIR: distDir, NEXT_TELEMETRY_DISABLED: "1" });
 }
-const { base, child } = await startBenchServer(distDir, databaseUrl, path.join(dir, "uploads"));
+// The project's own mail catcher: a client's choice e-mails the studio, as it would in use.
+const catcher = await startMailCatcher({ port: 0, dir: path.join(dir, "mail") });
+const { base, child } = await startBenchServer(distDir, databaseUrl, path.join(dir, "uploads"), `smtp://127.0.0.1:${catcher.port}`);
 try {
   const designer = await sessionCookie("bench-user-designer", "designer@bench.example");
   const clientCookie = await sessionCookie("bench-user-client", "client@bench.example");
@@ -78,6 +81,7 @@ try {
   rows.push({ measure: "server resident memory after the load run", ours: `${residentMemoryMiB(child.pid ?? 0).toFixed(0)} MiB`, baseline: "–", ratio: "–", target: "reported", met: "–" });
 } finally {
   child.kill("SIGTERM");
+  await catcher.close();
   rmSync(dir, { recursive: true, force: true });
 }
 printTable(rows);

@@ -6,7 +6,7 @@ import { freePort, waitForHttp } from "../scripts/lib/processes";
 export const BENCH_SECRET = "bench-secret-bench-secret-bench-secret-0123";
 
 /** `next start` of the production build in `distDir`, on a free port, with the benchmark database. */
-export async function startBenchServer(distDir: string, databaseUrl: string, uploadsDir: string) {
+export async function startBenchServer(distDir: string, databaseUrl: string, uploadsDir: string, smtpUrl: string) {
   const port = await freePort();
   const child: ChildProcess = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-p", String(port), "-H", "127.0.0.1"], {
     stdio: ["ignore", "ignore", "inherit"],
@@ -19,7 +19,7 @@ export async function startBenchServer(distDir: string, databaseUrl: string, upl
       UPLOADS_DIR: uploadsDir,
       AUTH_SECRET: BENCH_SECRET,
       AUTH_TRUST_HOST: "true",
-      SMTP_URL: "smtp://127.0.0.1:9",
+      SMTP_URL: smtpUrl,
     },
   });
   const base = `http://127.0.0.1:${port}`;

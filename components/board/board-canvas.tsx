@@ -3,6 +3,7 @@
 import { useId, useRef } from "react";
 import type { Rect } from "@/lib/boards/canvas";
 import type { BoardItemView } from "@/lib/boards/types";
+import { MotionScope } from "@/components/motion-scope";
 import { CanvasItem } from "./canvas-item";
 
 type Props = {
@@ -36,8 +37,9 @@ export function BoardCanvas({ items, editable, daylight, selectedId, highlightId
           if (e.target === e.currentTarget) onSelect(null);
         }}
       >
-        {items.map((item) => (
-          <CanvasItem
+        <MotionScope>
+          {items.map((item) => (
+            <CanvasItem
             key={item.id}
             item={item}
             editable={editable}
@@ -47,9 +49,10 @@ export function BoardCanvas({ items, editable, daylight, selectedId, highlightId
             canvasRef={ref}
             hintId={hintId}
             onSelect={onSelect}
-            onChange={onChange}
-          />
-        ))}
+              onChange={onChange}
+            />
+          ))}
+        </MotionScope>
       </div>
       {editable && (
         <p id={hintId} className="text-sm text-stone-600">

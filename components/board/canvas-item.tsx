@@ -1,6 +1,6 @@
 "use client";
 
-import { animate, motion, useDragControls, useMotionValue, useReducedMotion } from "framer-motion";
+import { animate, m, useDragControls, useMotionValue, useReducedMotion } from "framer-motion";
 import type { KeyboardEvent, PointerEvent, RefObject } from "react";
 import { useLayoutEffect, useRef, useState } from "react";
 import { cx } from "@/components/ui";
@@ -92,7 +92,7 @@ export function CanvasItem({ item, editable, selected, highlighted, daylight, ca
   };
 
   return (
-    <motion.div
+    <m.div
       role="button"
       tabIndex={0}
       aria-roledescription={movable ? "movable swatch" : "swatch"}
@@ -133,6 +133,6 @@ export function CanvasItem({ item, editable, selected, highlighted, daylight, ca
           className="absolute -bottom-1.5 -right-1.5 z-10 size-4 cursor-nwse-resize touch-none rounded-[2px] border-2 border-ink bg-white opacity-0 group-focus-visible:opacity-100 group-hover:opacity-100 group-aria-pressed:opacity-100"
         />
       )}
-    </motion.div>
+    </m.div>
   );
 }

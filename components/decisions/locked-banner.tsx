@@ -1,6 +1,7 @@
 "use client";
 
-import { motion, useReducedMotion } from "framer-motion";
+import { m, useReducedMotion } from "framer-motion";
+import { MotionScope } from "@/components/motion-scope";
 import type { ApprovalView } from "@/lib/decisions/types";
 import { When } from "./when";
 
@@ -10,11 +11,19 @@ import { When } from "./when";
  */
 type Props = { approval: ApprovalView | undefined; optionLabel: string; justLocked: boolean; audience: "client" | "staff" };
 
-export function LockedBanner({ approval, optionLabel, justLocked, audience }: Props) {
+export function LockedBanner(props: Props) {
+  return (
+    <MotionScope>
+      <Banner {...props} />
+    </MotionScope>
+  );
+}
+
+function Banner({ approval, optionLabel, justLocked, audience }: Props) {
   const reduce = useReducedMotion();
   const animate = justLocked && !reduce;
   return (
-    <motion.div
+    <m.div
       role="status"
       initial={animate ? { opacity: 0, y: 8 } : false}
       animate={{ opacity: 1, y: 0 }}
@@ -23,7 +32,7 @@ export function LockedBanner({ approval, optionLabel, justLocked, audience }: Pr
       data-testid="locked-banner"
     >
       <svg viewBox="0 0 24 24" width="28" height="28" aria-hidden="true" className="mt-0.5 shrink-0 text-ok-ink">
-        <motion.path
+        <m.path
           d="M7 11V8a5 5 0 0 1 10 0v3"
           fill="none"
           stroke="currentColor"
@@ -48,6 +57,6 @@ export function LockedBanner({ approval, optionLabel, justLocked, audience }: Pr
             : "Nobody can edit it. A change goes through a variation: priced here, approved by the client."}
         </p>
       </div>
-    </motion.div>
+    </m.div>
   );
 }

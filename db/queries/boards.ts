@@ -29,6 +29,15 @@ export async function getBoardView(actor: Actor, boardId: string, cct: number = 
   return boardViews(`${boardId}|${cct}|${access}`, () => assembleFromHead(head, cct, access));
 }
 
+const boardJson = readCache<string>("board-json", 500);
+
+/** The same board view as JSON text, for GET /api/boards/:id: cached as text, so a repeat read is not serialised again. */
+export async function getBoardJson(actor: Actor, boardId: string, cct: number = DAYLIGHT.cct): Promise<string> {
+  const head = await boardHeads(boardId, () => readBoardHead(boardId));
+  const access = boardAccess(actor, head.project, "read");
+  return boardJson(`${boardId}|${cct}|${access}`, async () => JSON.stringify(await getBoardView(actor, boardId, cct)));
+}
+
 async function assembleFromHead({ board, project, room, checkSettings }: Awaited<ReturnType<typeof readBoardHead>>, cct: number, access: "edit" | "read") {
   const [items, pairs] = await Promise.all([readItemRows([board.id]), readPairRows([board.id])]);
   const { thresholds, settingsIgnored } = resolveThresholds(checkSettings);

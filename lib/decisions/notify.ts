@@ -1,6 +1,7 @@
 import "server-only";
 import { listProjectClientRecipients, listStudioStaffRecipients, type Recipient } from "@/db/queries/decision-people";
 import { clientChoseMessage, decisionWaitingMessage, variationMessage, type EmailContent, type VariationStage } from "@/lib/mail/messages";
+import { afterResponse } from "@/lib/mail/after-response";
 import { appUrl, sendMail } from "@/lib/mail/send";
 
 type DecisionRef = { id: string; title: string; dueDate: string };
@@ -11,16 +12,19 @@ export const clientDecisionPath = (decisionId: string) => `/client/decisions/${d
 
 /**
  * The change is already committed when these run, so a mail server that is down must not turn a
- * saved approval into an error: failures are logged, and the person's screen still tells the truth.
+ * saved approval into an error: the mail goes out after the answer, failures are logged, and the
+ * person's screen still tells the truth.
  */
 async function deliver(recipients: Recipient[], build: (r: Recipient) => EmailContent) {
-  for (const r of recipients) {
-    try {
-      await sendMail({ to: r.email, ...build(r) });
-    } catch (error) {
-      console.error(`could not e-mail ${r.email}:`, error);
+  await afterResponse(async () => {
+    for (const r of recipients) {
+      try {
+        await sendMail({ to: r.email, ...build(r) });
+      } catch (error) {
+        console.error(`could not e-mail ${r.email}:`, error);
+      }
     }
-  }
+  });
 }
 
 /** "A decision is waiting for you", to each of the project's clients. */

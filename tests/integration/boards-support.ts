@@ -1,4 +1,5 @@
 import { createClient } from "@libsql/client";
+import { markWritten } from "@/db/queries/read-cache";
 
 /** Calls a route handler as the browser would and reads its JSON. */
 export async function callRoute<P extends Record<string, string>>(
@@ -24,6 +25,8 @@ export async function sql<T = Record<string, unknown>>(statement: string, args: 
     return rows as unknown as T[];
   } finally {
     client.close();
+    // Behind the app's back: whatever it has cached may be stale now.
+    markWritten();
   }
 }
 

@@ -1,4 +1,5 @@
 import { createClient } from "@libsql/client";
+import { markWritten } from "@/db/queries/read-cache";
 import { readdirSync } from "node:fs";
 import sharp from "sharp";
 import { actAs, type Persona } from "./session";
@@ -51,6 +52,8 @@ export async function runSql(statement: string, args: (string | number | null)[]
     await client.execute({ sql: statement, args });
   } finally {
     client.close();
+    // Behind the app's back: whatever it has cached is stale now.
+    markWritten();
   }
 }
 

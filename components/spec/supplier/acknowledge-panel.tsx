@@ -1,7 +1,8 @@
 "use client";
 
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { motion } from "framer-motion";
+import { m } from "framer-motion";
+import { MotionScope } from "@/components/motion-scope";
 import { Badge, Button } from "@/components/ui";
 import { formatShortDay } from "@/lib/spec/format";
 import { postAcknowledgement, revisionKey } from "./api";
@@ -21,13 +22,15 @@ export function AcknowledgePanel({ revisionId, letter, acknowledgedAt, byName, r
   if (acknowledgedAt) {
     return (
       // Animate only a fresh acknowledgement: a server-rendered one must be visible without scripts.
-      <motion.div initial={mutation.isSuccess ? { opacity: 0, y: 6 } : false} animate={{ opacity: 1, y: 0 }} transition={{ duration: 0.25 }} className="flex flex-col items-start gap-1" role="status">
-        <Badge tone="ok">You acknowledged revision {letter}</Badge>
-        <p className="text-ink-soft">
-          On {formatShortDay(acknowledgedAt.slice(0, 10))}
-          {byName ? ` by ${byName}` : ""}.{replaced ? "" : " Record order dates on each line below."}
-        </p>
-      </motion.div>
+      <MotionScope>
+        <m.div initial={mutation.isSuccess ? { opacity: 0, y: 6 } : false} animate={{ opacity: 1, y: 0 }} transition={{ duration: 0.25 }} className="flex flex-col items-start gap-1" role="status">
+          <Badge tone="ok">You acknowledged revision {letter}</Badge>
+          <p className="text-ink-soft">
+            On {formatShortDay(acknowledgedAt.slice(0, 10))}
+            {byName ? ` by ${byName}` : ""}.{replaced ? "" : " Record order dates on each line below."}
+          </p>
+        </m.div>
+      </MotionScope>
     );
   }
   return (

@@ -1,5 +1,5 @@
 import { NextResponse } from "next/server";
-import { getBoardView } from "@/db/queries/boards";
+import { getBoardJson } from "@/db/queries/boards";
 import { requireApiUser } from "@/lib/auth/session";
 import { route } from "@/lib/http";
 import { readCct } from "@/lib/validation/board";
@@ -10,5 +10,5 @@ export const GET = route(async (request: Request, { params }: BoardParams) => {
   const actor = await requireApiUser();
   const { boardId } = await params;
   const cct = readCct(request);
-  return NextResponse.json(await getBoardView(actor, boardId, cct));
+  return new NextResponse(await getBoardJson(actor, boardId, cct), { headers: { "content-type": "application/json" } });
 });

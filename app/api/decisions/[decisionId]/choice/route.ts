@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { chooseOption } from "@/db/queries/decision-choices";
-import { getDecisionView } from "@/db/queries/decision-view";
+import { buildDecisionView } from "@/db/queries/decision-view";
 import { getDecisionAccess } from "@/db/queries/decisions";
 import { requireApiUser } from "@/lib/auth/session";
 import { notifyClientChose } from "@/lib/decisions/notify";
@@ -24,5 +24,6 @@ export const POST = route(async (request, { params }: Context) => {
       request.headers.get("origin") ?? undefined,
     );
   }
-  return NextResponse.json(await getDecisionView(actor, decisionId));
+  // The decision as this write left it: no need to look up who may see it a third time.
+  return NextResponse.json(await buildDecisionView(actor, { decision, project, role: "client" }));
 });
