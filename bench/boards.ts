@@ -104,7 +104,12 @@ async function benchQuery(): Promise<BenchRow> {
       }
       return times.sort((x, y) => x - y);
     };
-    const times = await timeRuns(async (i) => JSON.stringify(await getBoardView(actor, "demo-board-kitchen-a", i % 2 ? 2700 : 6504)));
+    // Every read a miss: the cache (read-cache.ts) is made stale before each one, as a write would.
+    const { markWritten } = await import("../db/queries/read-cache");
+    const times = await timeRuns(async (i) => {
+      markWritten();
+      return JSON.stringify(await getBoardView(actor, "demo-board-kitchen-a", i % 2 ? 2700 : 6504));
+    });
     // Baseline: one small query of the same kind (a project by id, with the permission check), so
     // a busy machine shows up in both columns.
     const base = await timeRuns(() => getProjectForActor(actor, "demo-project-marrow"));
@@ -112,7 +117,7 @@ async function benchQuery(): Promise<BenchRow> {
     const p95 = times[Math.floor(times.length * 0.95)] ?? NaN;
     const baseMedian = base[base.length >> 1] ?? NaN;
     return {
-      measure: `getBoardView, ${SWATCHES} swatches, ${SWATCHES - 1} pairs, from libSQL (median; p95)`,
+      measure: `getBoardView, ${SWATCHES} swatches, ${SWATCHES - 1} pairs, from libSQL, uncached (median; p95)`,
       ours: `${median.toFixed(2)} ms; ${p95.toFixed(2)} ms`, baseline: `${baseMedian.toFixed(2)} ms (one project read)`,
       ratio: `${(median / baseMedian).toFixed(1)}×`, target: "≤ 5 ms median", met: median <= 5 ? "yes" : "no",
     };

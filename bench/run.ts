@@ -67,7 +67,7 @@ try {
     await warm(url, cookie);
     const at50 = await measureLoad(url, 50, { cookie, ...extra });
     const at10 = await measureLoad(url, 10, { cookie, ...extra });
-    rows.push(...rowsForEndpoint(name, at50, at10, baseline50));
+    rows.push(...rowsForEndpoint(name, at50, at10, baseline50, extra.method !== "POST"));
   }
 
   const bare = await measurePageJs(base, "/sign-in/check-email");

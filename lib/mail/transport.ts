@@ -28,12 +28,14 @@ function isLocalCatcherUrl(url: URL): boolean {
   return url.protocol === "smtp:" && LOCAL_HOSTS.has(url.hostname);
 }
 
-// The local catcher has no usable certificate, so nodemailer must not even try STARTTLS.
 // nodemailer ignores extra options when given a URL, but it reads them from the query string.
+// pool: a few SMTP connections kept open and reused, instead of a new one (and a new TLS
+// handshake) for every message; a burst of choices then costs the mail server little.
+// ignoreTLS: the local catcher has no usable certificate, so nodemailer must not even try STARTTLS.
 function toTransportUrl(smtpUrl: string): string {
   const url = new URL(smtpUrl);
-  if (!isLocalCatcherUrl(url)) return smtpUrl;
-  url.searchParams.set("ignoreTLS", "true");
+  if (!url.searchParams.has("pool")) url.searchParams.set("pool", "true");
+  if (isLocalCatcherUrl(url)) url.searchParams.set("ignoreTLS", "true");
   return url.toString();
 }
 
