@@ -15,8 +15,8 @@ import { runBoardWrite } from "./board-version";
 import { readCache } from "./read-cache";
 import type { Actor } from "./users";
 
-const boardHeads = readCache<Awaited<ReturnType<typeof readBoardHead>>>("board-head", 5000);
-const boardViews = readCache<BoardView>("board-view", 500);
+const boardHeads = readCache<Awaited<ReturnType<typeof readBoardHead>>>("board-head", 2000);
+const boardViews = readCache<BoardView>("board-view", 100);
 
 /**
  * The board with its items, pairs and checks under one light (daylight unless told). Who may see
@@ -29,7 +29,7 @@ export async function getBoardView(actor: Actor, boardId: string, cct: number = 
   return boardViews(`${boardId}|${cct}|${access}`, () => assembleFromHead(head, cct, access));
 }
 
-const boardJson = readCache<string>("board-json", 500);
+const boardJson = readCache<string>("board-json", 200);
 
 /** The same board view as JSON text, for GET /api/boards/:id: cached as text, so a repeat read is not serialised again. */
 export async function getBoardJson(actor: Actor, boardId: string, cct: number = DAYLIGHT.cct): Promise<string> {

@@ -46,7 +46,7 @@ export function listFinishes(studioId: string, query: FinishListQuery): Promise<
 }
 
 /** Pages already read, until the next write (read-cache.ts): a designer paging back and forth, or a team on one library. */
-const finishPages = readCache<FinishPage>("finish-page", 1000);
+const finishPages = readCache<FinishPage>("finish-page", 200);
 
 async function readFinishPage(studioId: string, query: FinishListQuery): Promise<FinishPage> {
   const where = and(
