@@ -17,25 +17,30 @@ import type { Actor } from "./users";
 
 const boardHeads = readCache<Awaited<ReturnType<typeof readBoardHead>>>("board-head", 2000);
 const boardViews = readCache<BoardView>("board-view", 100);
-
-/**
- * The board with its items, pairs and checks under one light (daylight unless told). Who may see
- * it is decided on every call; the view itself is cached per light and access until the next
- * write (read-cache.ts).
- */
-export async function getBoardView(actor: Actor, boardId: string, cct: number = DAYLIGHT.cct): Promise<BoardView> {
-  const head = await boardHeads(boardId, () => readBoardHead(boardId));
-  const access = boardAccess(actor, head.project, "read");
-  return boardViews(`${boardId}|${cct}|${access}`, () => assembleFromHead(head, cct, access));
-}
-
 const boardJson = readCache<string>("board-json", 200);
 
-/** The same board view as JSON text, for GET /api/boards/:id: cached as text, so a repeat read is not serialised again. */
-export async function getBoardJson(actor: Actor, boardId: string, cct: number = DAYLIGHT.cct): Promise<string> {
+/**
+ * Who may see the board is decided on every call, outside the caches; what they see is the same
+ * for everyone with the same access, so it is cached per light and access until the next write
+ * (read-cache.ts).
+ */
+async function openCachedBoard(actor: Actor, boardId: string, cct: number) {
   const head = await boardHeads(boardId, () => readBoardHead(boardId));
   const access = boardAccess(actor, head.project, "read");
-  return boardJson(`${boardId}|${cct}|${access}`, async () => JSON.stringify(await getBoardView(actor, boardId, cct)));
+  const key = `${boardId}|${cct}|${access}`;
+  const view = () => boardViews(key, () => assembleFromHead(head, cct, access));
+  return { key, view };
+}
+
+/** The board with its items, pairs and checks under one light (daylight unless told). */
+export async function getBoardView(actor: Actor, boardId: string, cct: number = DAYLIGHT.cct): Promise<BoardView> {
+  return (await openCachedBoard(actor, boardId, cct)).view();
+}
+
+/** The same view as JSON text, for GET /api/boards/:id: a repeat read is not serialised again. */
+export async function getBoardJson(actor: Actor, boardId: string, cct: number = DAYLIGHT.cct): Promise<string> {
+  const { key, view } = await openCachedBoard(actor, boardId, cct);
+  return boardJson(key, async () => JSON.stringify(await view()));
 }
 
 async function assembleFromHead({ board, project, room, checkSettings }: Awaited<ReturnType<typeof readBoardHead>>, cct: number, access: "edit" | "read") {

@@ -36,18 +36,19 @@ function orderFor(sort: FinishSortKey, dir: "asc" | "desc"): SQL[] {
   return [primary, asc(sortColumns.name), asc(finishes.id)];
 }
 
+/** Pages already read are kept until the next write (read-cache.ts): a designer paging back and forth, or a team on one library. */
+const finishPages = readCache<FinishPage>("finish-page", 200);
+
+/** One page of a studio's library, filtered and sorted as asked. */
+export function listFinishes(studioId: string, query: FinishListQuery): Promise<FinishPage> {
+  return finishPages(`${studioId}|${JSON.stringify(query)}`, () => readFinishPage(studioId, query));
+}
+
 /**
  * One page of a studio's library. Sorting 10,000 whole rows is what costs, so the sort runs over
  * ids and sort keys only (the studio filter uses its index), and just the page's rows are read
  * in full afterwards; the count runs beside it.
  */
-export function listFinishes(studioId: string, query: FinishListQuery): Promise<FinishPage> {
-  return finishPages(`${studioId}|${JSON.stringify(query)}`, () => readFinishPage(studioId, query));
-}
-
-/** Pages already read, until the next write (read-cache.ts): a designer paging back and forth, or a team on one library. */
-const finishPages = readCache<FinishPage>("finish-page", 200);
-
 async function readFinishPage(studioId: string, query: FinishListQuery): Promise<FinishPage> {
   const where = and(
     eq(finishes.studioId, studioId),
