@@ -2,7 +2,7 @@ import autocannon from "autocannon";
 import { gzipSync } from "node:zlib";
 import type { BenchRow } from "./table";
 
-type Load = { rps: number; p99: number; errors: number };
+type Load = { rps: number; p99: number; errors: number; ok: number };
 
 /** One autocannon run: requests per second, p99 latency, and everything that wasn't a 2xx. */
 export async function measureLoad(
@@ -22,7 +22,7 @@ export async function measureLoad(
     },
     requests: options.bodies?.map((body) => ({ method: options.method ?? "GET", body })),
   });
-  return { rps: result.requests.average, p99: result.latency.p99, errors: result.errors + result.timeouts + result.non2xx };
+  return { rps: result.requests.average, p99: result.latency.p99, errors: result.errors + result.timeouts + result.non2xx, ok: result["2xx"] };
 }
 
 const fmt = (n: number, digits = 0) => n.toFixed(digits);

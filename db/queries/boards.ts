@@ -17,7 +17,7 @@ import type { Actor } from "./users";
 
 const boardHeads = readCache<Awaited<ReturnType<typeof readBoardHead>>>("board-head", 2000);
 const boardViews = readCache<BoardView>("board-view", 100);
-const boardJson = readCache<string>("board-json", 200);
+const boardJson = readCache<Uint8Array<ArrayBuffer>>("board-json", 200);
 
 /**
  * Who may see the board is decided on every call, outside the caches; what they see is the same
@@ -37,10 +37,10 @@ export async function getBoardView(actor: Actor, boardId: string, cct: number = 
   return (await openCachedBoard(actor, boardId, cct)).view();
 }
 
-/** The same view as JSON text, for GET /api/boards/:id: a repeat read is not serialised again. */
-export async function getBoardJson(actor: Actor, boardId: string, cct: number = DAYLIGHT.cct): Promise<string> {
+/** The same view as UTF-8 JSON, for GET /api/boards/:id: a repeat read is neither serialised nor encoded again. */
+export async function getBoardJson(actor: Actor, boardId: string, cct: number = DAYLIGHT.cct): Promise<Uint8Array<ArrayBuffer>> {
   const { key, view } = await openCachedBoard(actor, boardId, cct);
-  return boardJson(key, async () => JSON.stringify(await view()));
+  return boardJson(key, async () => new TextEncoder().encode(JSON.stringify(await view())));
 }
 
 async function assembleFromHead({ board, project, room, checkSettings }: Awaited<ReturnType<typeof readBoardHead>>, cct: number, access: "edit" | "read") {

@@ -39,9 +39,17 @@ function orderFor(sort: FinishSortKey, dir: "asc" | "desc"): SQL[] {
 /** Pages already read are kept until the next write (read-cache.ts): a designer paging back and forth, or a team on one library. */
 const finishPages = readCache<FinishPage>("finish-page", 200);
 
+const finishPagesJson = readCache<Uint8Array<ArrayBuffer>>("finish-page-json", 200);
+const pageKey = (studioId: string, query: FinishListQuery) => `${studioId}|${JSON.stringify(query)}`;
+
 /** One page of a studio's library, filtered and sorted as asked. */
 export function listFinishes(studioId: string, query: FinishListQuery): Promise<FinishPage> {
-  return finishPages(`${studioId}|${JSON.stringify(query)}`, () => readFinishPage(studioId, query));
+  return finishPages(pageKey(studioId, query), () => readFinishPage(studioId, query));
+}
+
+/** The same page as UTF-8 JSON, for GET /api/finishes: a repeat read is neither serialised nor encoded again. */
+export function listFinishesJson(studioId: string, query: FinishListQuery): Promise<Uint8Array<ArrayBuffer>> {
+  return finishPagesJson(pageKey(studioId, query), async () => new TextEncoder().encode(JSON.stringify(await listFinishes(studioId, query))));
 }
 
 /**

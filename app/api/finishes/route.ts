@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { createFinish, requireStudioId } from "@/db/queries/finishes";
-import { listFinishes } from "@/db/queries/finish-list";
+import { listFinishesJson } from "@/db/queries/finish-list";
 import { requireApiUser } from "@/lib/auth/session";
 import { readJson, route } from "@/lib/http";
 import { finishInputSchema, finishListQuerySchema } from "@/lib/validation/finish";
@@ -9,7 +9,7 @@ import { finishInputSchema, finishListQuerySchema } from "@/lib/validation/finis
 export const GET = route(async (request) => {
   const actor = await requireApiUser("designer");
   const query = finishListQuerySchema.parse(Object.fromEntries(new URL(request.url).searchParams));
-  return NextResponse.json(await listFinishes(requireStudioId(actor), query));
+  return new NextResponse(await listFinishesJson(requireStudioId(actor), query), { headers: { "content-type": "application/json" } });
 });
 
 export const POST = route(async (request) => {
