@@ -57,6 +57,15 @@ describe("mail catcher", () => {
     expect(new Date(message?.receivedAt ?? "").toISOString()).toBe(message?.receivedAt);
   });
 
+  it("delivers a burst of messages sent at once over the pooled connections, every one", async () => {
+    // Project behaviour: nodemailer's pooled SMTP transport (its documented `pool` option) keeps a
+    // few connections open; a burst must still arrive whole.
+    const sent = Array.from({ length: 20 }, (_, n) => mailer.send({ to: "burst@example.com", subject: `Burst ${n}`, text: `Message ${n}` }));
+    await Promise.all(sent);
+    const caught = await readCaughtMail(dir, { to: "burst@example.com" });
+    expect(new Set(caught.map((m) => m.subject)).size).toBe(20);
+  });
+
   it("lists newest first and filters by recipient", async () => {
     await mailer.send({ to: "bo@example.com", subject: "First for Bo", text: "https://mottle.example.com/one" });
     await mailer.send({
