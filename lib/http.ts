@@ -60,3 +60,15 @@ export async function readJson(request: Request): Promise<unknown> {
     throw new HttpError(400, "The request body must be JSON.");
   }
 }
+
+export type JsonBytes = Uint8Array<ArrayBuffer>;
+
+/** A value as UTF-8 JSON, ready to cache and send as it is. */
+export function encodeJson(value: unknown): JsonBytes {
+  return new TextEncoder().encode(JSON.stringify(value));
+}
+
+/** Sends JSON that was encoded earlier (see encodeJson), without serialising it again. */
+export function jsonBytesResponse(bytes: JsonBytes, status = 200): NextResponse {
+  return new NextResponse(bytes, { status, headers: { "content-type": "application/json" } });
+}

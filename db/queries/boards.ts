@@ -6,7 +6,7 @@ import { resolveThresholds } from "@/lib/boards/check-settings";
 import { DAYLIGHT } from "@/lib/boards/lights";
 import type { BoardList, BoardSummary, BoardView } from "@/lib/boards/types";
 import { assembleBoardView } from "@/lib/boards/view";
-import { HttpError } from "@/lib/http";
+import { encodeJson, HttpError, type JsonBytes } from "@/lib/http";
 import type { CreateBoardInput } from "@/lib/validation/board";
 import { writeAudit } from "./audit";
 import { boardAccess, getStudioThresholds, openProjectForBoards, readBoardHead } from "./board-access";
@@ -17,7 +17,7 @@ import type { Actor } from "./users";
 
 const boardHeads = readCache<Awaited<ReturnType<typeof readBoardHead>>>("board-head", 2000);
 const boardViews = readCache<BoardView>("board-view", 100);
-const boardJson = readCache<Uint8Array<ArrayBuffer>>("board-json", 200);
+const boardJson = readCache<JsonBytes>("board-json", 200);
 
 /**
  * Who may see the board is decided on every call, outside the caches; what they see is the same
@@ -38,9 +38,9 @@ export async function getBoardView(actor: Actor, boardId: string, cct: number = 
 }
 
 /** The same view as UTF-8 JSON, for GET /api/boards/:id: a repeat read is neither serialised nor encoded again. */
-export async function getBoardJson(actor: Actor, boardId: string, cct: number = DAYLIGHT.cct): Promise<Uint8Array<ArrayBuffer>> {
+export async function getBoardJson(actor: Actor, boardId: string, cct: number = DAYLIGHT.cct): Promise<JsonBytes> {
   const { key, view } = await openCachedBoard(actor, boardId, cct);
-  return boardJson(key, async () => new TextEncoder().encode(JSON.stringify(await view())));
+  return boardJson(key, async () => encodeJson(await view()));
 }
 
 async function assembleFromHead({ board, project, room, checkSettings }: Awaited<ReturnType<typeof readBoardHead>>, cct: number, access: "edit" | "read") {

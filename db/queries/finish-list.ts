@@ -1,6 +1,7 @@
 import { and, asc, eq, getTableColumns, inArray, isNotNull, isNull, or, sql, type AnyColumn, type SQL } from "drizzle-orm";
 import { db } from "@/db";
 import { finishes, suppliers } from "@/db/schema";
+import { encodeJson, type JsonBytes } from "@/lib/http";
 import type { FinishListQuery, FinishSortKey } from "@/lib/validation/finish";
 import { toFinishSummary, type FinishPage } from "./finish-dto";
 import { readCache } from "./read-cache";
@@ -39,7 +40,7 @@ function orderFor(sort: FinishSortKey, dir: "asc" | "desc"): SQL[] {
 /** Pages already read are kept until the next write (read-cache.ts): a designer paging back and forth, or a team on one library. */
 const finishPages = readCache<FinishPage>("finish-page", 200);
 
-const finishPagesJson = readCache<Uint8Array<ArrayBuffer>>("finish-page-json", 200);
+const finishPagesJson = readCache<JsonBytes>("finish-page-json", 200);
 const pageKey = (studioId: string, query: FinishListQuery) => `${studioId}|${JSON.stringify(query)}`;
 
 /** One page of a studio's library, filtered and sorted as asked. */
@@ -48,8 +49,8 @@ export function listFinishes(studioId: string, query: FinishListQuery): Promise<
 }
 
 /** The same page as UTF-8 JSON, for GET /api/finishes: a repeat read is neither serialised nor encoded again. */
-export function listFinishesJson(studioId: string, query: FinishListQuery): Promise<Uint8Array<ArrayBuffer>> {
-  return finishPagesJson(pageKey(studioId, query), async () => new TextEncoder().encode(JSON.stringify(await listFinishes(studioId, query))));
+export function listFinishesJson(studioId: string, query: FinishListQuery): Promise<JsonBytes> {
+  return finishPagesJson(pageKey(studioId, query), async () => encodeJson(await listFinishes(studioId, query)));
 }
 
 /**

@@ -1,7 +1,6 @@
-import { NextResponse } from "next/server";
 import { getBoardJson } from "@/db/queries/boards";
 import { requireApiUser } from "@/lib/auth/session";
-import { route } from "@/lib/http";
+import { jsonBytesResponse, route } from "@/lib/http";
 import { readCct } from "@/lib/validation/board";
 import type { BoardParams } from "./board-response";
 
@@ -10,5 +9,5 @@ export const GET = route(async (request: Request, { params }: BoardParams) => {
   const actor = await requireApiUser();
   const { boardId } = await params;
   const cct = readCct(request);
-  return new NextResponse(await getBoardJson(actor, boardId, cct), { headers: { "content-type": "application/json" } });
+  return jsonBytesResponse(await getBoardJson(actor, boardId, cct));
 });
