@@ -26,15 +26,20 @@ const env: NodeJS.ProcessEnv = {
   E2E_CATCHER_PORT: String(catcherPort),
 };
 
+// NEXT_DIST_DIR lets two checkouts' worth of builds sit side by side (see next.config.ts).
+const distDir = process.env.NEXT_DIST_DIR ?? ".next";
+// Test files named on the command line run on their own (`npm run test:e2e -- --no-build tests/e2e/x.test.ts`).
+const only = process.argv.slice(2).filter((a) => a.endsWith(".test.ts"));
+
 await ensureChromium();
-if (!process.argv.includes("--no-build") || !existsSync(".next/BUILD_ID")) await run("npx", ["next", "build"], env);
+if (!process.argv.includes("--no-build") || !existsSync(path.join(distDir, "BUILD_ID"))) await run("npx", ["next", "build"], env);
 await run("npx", ["tsx", "--conditions=react-server", "scripts/seed.ts"], env);
 const { startMailCatcher } = await import("../lib/mail/catcher");
 const catcher = await startMailCatcher({ port: catcherPort, dir: env.MAIL_CATCHER_DIR ?? "" });
 const server = await startNext(port, env, true, "127.0.0.1");
 let failed = false;
 // The permission matrix first, on the freshly seeded database, then the flows that change it.
-const suites = [["tests/e2e/permission-matrix.test.ts"], ["--exclude", "tests/e2e/permission-matrix.test.ts"]];
+const suites = only.length ? [only] : [["tests/e2e/permission-matrix.test.ts"], ["--exclude", "tests/e2e/permission-matrix.test.ts"]];
 try {
   for (const suite of suites) {
     await run("npx", ["vitest", "run", "--config", "vitest.e2e.config.ts", ...suite], env).catch((error: unknown) => {

@@ -84,11 +84,37 @@ export const projectMembers = sqliteTable(
     /** Set for supplier members: the company whose lines they may see. */
     supplierId: text("supplier_id").references(() => suppliers.id, { onDelete: "cascade" }),
     invitedBy: text("invited_by").references(() => users.id, { onDelete: "set null" }),
+    /** The person's name as this project's studio typed it; never shown to another studio. */
+    displayName: text("display_name"),
     createdAt: createdAt(),
   },
   (t) => [uniqueIndex("project_member_unique").on(t.projectId, t.userId), index("project_member_user_idx").on(t.userId)],
 );
 export type ProjectMember = typeof projectMembers.$inferSelect;
+
+/**
+ * An invitation to a project that the person has not accepted yet. Someone who already has an
+ * account sees it on their home page and joins only when they accept; nothing of theirs is shown
+ * to the inviting studio meanwhile.
+ */
+export const projectInvitations = sqliteTable(
+  "project_invitation",
+  {
+    id: id(),
+    projectId: text("project_id")
+      .notNull()
+      .references(() => projects.id, { onDelete: "cascade" }),
+    email: text("email").notNull(),
+    /** The name the studio typed for them. */
+    name: text("name"),
+    role: text("role", { enum: projectRoles }).notNull(),
+    supplierId: text("supplier_id").references(() => suppliers.id, { onDelete: "cascade" }),
+    invitedBy: text("invited_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("project_invitation_unique").on(t.projectId, t.email), index("project_invitation_email_idx").on(t.email)],
+);
+export type ProjectInvitation = typeof projectInvitations.$inferSelect;
 
 export const rooms = sqliteTable(
   "room",
