@@ -25,7 +25,15 @@ const schema = z
     MAIL_CATCHER_DIR: z.string().default(path.join(dataDir, "mail")),
     UPLOADS_DIR: z.string().default(path.resolve(process.cwd(), "uploads")),
     AUTH_SECRET: z.string().min(32).optional(),
-    APP_URL: z.string().url().optional(),
+    /** The public address every e-mailed link uses (scheme, host, port); required in production. */
+    APP_URL: z
+      .string()
+      .url()
+      .refine((v) => /^https?:\/\//.test(v), { message: "APP_URL must be an http:// or https:// address" })
+      .optional(),
+    PORT: z.coerce.number().int().min(1).max(65535).default(3000),
+    /** How many proxies in front of Mottle add themselves to X-Forwarded-For; 0 trusts none (the socket address). */
+    TRUSTED_PROXY_HOPS: z.coerce.number().int().min(0).max(10).default(0),
   })
   .transform((raw) => {
     const mode = raw.MOTTLE_MODE ?? (raw.NODE_ENV === "production" ? "production" : raw.NODE_ENV);
@@ -60,6 +68,9 @@ function loadEnv(): Env & { AUTH_SECRET: string } {
   if (env.MOTTLE_MODE === "production" && !env.AUTH_SECRET && !building) {
     throw new Error("Mottle cannot start: set AUTH_SECRET (at least 32 characters) in production.");
   }
+  if (env.MOTTLE_MODE === "production" && !env.APP_URL && !building) {
+    throw new Error("Mottle cannot start: set APP_URL to the public address people use (e.g. https://mottle.example.com) in production.");
+  }
   const secret = env.AUTH_SECRET ?? readOrCreateSecret();
   // Auth.js reads AUTH_SECRET itself; keep it in step with what we resolved.
   process.env.AUTH_SECRET = secret;
@@ -67,6 +78,13 @@ function loadEnv(): Env & { AUTH_SECRET: string } {
 }
 
 export const env = loadEnv();
+
+/**
+ * The one origin every link in an e-mail and every write's Origin is measured against: APP_URL,
+ * else this server's own loopback address. Never taken from a request header (Host,
+ * X-Forwarded-Host and Origin are the caller's to forge).
+ */
+export const publicOrigin = new URL(env.APP_URL ?? `http://127.0.0.1:${env.PORT}`).origin;
 
 /** The dev mail inbox and other conveniences exist only outside production. */
 export const isDevLike = env.MOTTLE_MODE !== "production";

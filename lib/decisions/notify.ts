@@ -28,8 +28,8 @@ async function deliver(recipients: Recipient[], build: (r: Recipient) => EmailCo
 }
 
 /** "A decision is waiting for you", to each of the project's clients. */
-export async function notifyDecisionWaiting(project: ProjectRef, decision: DecisionRef, origin?: string) {
-  const url = appUrl(clientDecisionPath(decision.id), origin);
+export async function notifyDecisionWaiting(project: ProjectRef, decision: DecisionRef) {
+  const url = appUrl(clientDecisionPath(decision.id));
   await deliver(await listProjectClientRecipients(project.id), () =>
     decisionWaitingMessage({ url, projectName: project.name, decisionTitle: decision.title, dueDate: decision.dueDate }),
   );
@@ -40,9 +40,8 @@ export async function notifyClientChose(
   project: ProjectRef,
   decision: DecisionRef,
   input: { clientName: string; optionLabel: string; approved: boolean },
-  origin?: string,
 ) {
-  const url = appUrl(studioDecisionPath(project.id, decision.id), origin);
+  const url = appUrl(studioDecisionPath(project.id, decision.id));
   await deliver(await listStudioStaffRecipients(project.studioId), () =>
     clientChoseMessage({ url, projectName: project.name, decisionTitle: decision.title, ...input }),
   );
@@ -58,13 +57,12 @@ export async function notifyVariation(
   variationId: string,
   stage: VariationStage,
   audience: "staff" | "clients",
-  origin?: string,
 ) {
   const path =
     audience === "staff"
       ? `${studioDecisionPath(project.id, decision.id)}/variations/${variationId}`
       : `${clientDecisionPath(decision.id)}/variations/${variationId}`;
-  const url = appUrl(path, origin);
+  const url = appUrl(path);
   const recipients = audience === "staff" ? await listStudioStaffRecipients(project.studioId) : await listProjectClientRecipients(project.id);
   await deliver(recipients, () => variationMessage({ url, projectName: project.name, decisionTitle: decision.title, stage }));
 }

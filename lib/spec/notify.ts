@@ -17,9 +17,9 @@ async function trySend(to: string, message: { subject: string; text: string; htm
 }
 
 /** Issues the next revision, then e-mails each supplier's contacts a link to their lines in it. */
-export async function issueRevisionAndNotify(actor: Actor, projectId: string, origin?: string) {
+export async function issueRevisionAndNotify(actor: Actor, projectId: string) {
   const issued = await issueRevision(actor, projectId);
-  const url = appUrl(`/supplier/revisions/${issued.revision.id}`, origin);
+  const url = appUrl(`/supplier/revisions/${issued.revision.id}`);
   const sends = issued.recipients.flatMap((r) =>
     r.emails.map(async (to) => ({
       supplierId: r.supplierId,
@@ -40,10 +40,10 @@ export async function issueRevisionAndNotify(actor: Actor, projectId: string, or
 }
 
 /** Records a supplier's acknowledgement and, the first time, tells the studio. */
-export async function acknowledgeRevisionAndNotify(actor: Actor, revisionId: string, origin?: string) {
+export async function acknowledgeRevisionAndNotify(actor: Actor, revisionId: string) {
   const result = await acknowledgeRevision(actor, revisionId);
   if (result.created) {
-    const url = appUrl(`/studio/projects/${result.project.id}/handoff`, origin);
+    const url = appUrl(`/studio/projects/${result.project.id}/handoff`);
     const message = supplierAcknowledgedMessage({
       url,
       projectName: result.project.name,

@@ -1,7 +1,6 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
-import { headers } from "next/headers";
 import { addDesigner } from "@/db/queries/studios";
 import { failure, formValues, type ActionResult } from "@/lib/actions/result";
 import { requireApiUser } from "@/lib/auth/session";
@@ -15,11 +14,10 @@ export async function inviteDesignerAction(_prev: ActionResult, form: FormData):
     const actor = await requireApiUser("owner");
     const input = inviteDesignerSchema.parse(formValues(form));
     const user = await addDesigner(actor.studio?.id ?? "", actor.userId, input);
-    const origin = (await headers()).get("origin") ?? undefined;
     await sendMail({
       to: user.email,
       ...invitationMessage({
-        url: appUrl(`/sign-in?email=${encodeURIComponent(user.email)}`, origin),
+        url: appUrl(`/sign-in?email=${encodeURIComponent(user.email)}`),
         studioName: actor.studio?.name ?? "",
         inviterName: actor.name ?? actor.email,
         role: "designer",

@@ -1,7 +1,6 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
-import { headers } from "next/headers";
 import { addProjectMember, getProjectForStaff } from "@/db/queries/projects";
 import { failure, formValues, type ActionResult } from "@/lib/actions/result";
 import { requireApiUser } from "@/lib/auth/session";
@@ -15,8 +14,7 @@ export async function inviteToProjectAction(projectId: string, _prev: ActionResu
     await getProjectForStaff(actor, projectId);
     const input = inviteToProjectSchema.parse(formValues(form));
     const { project, user } = await addProjectMember(actor, projectId, input);
-    const origin = (await headers()).get("origin") ?? undefined;
-    const url = appUrl(`/sign-in?email=${encodeURIComponent(user.email)}`, origin);
+    const url = appUrl(`/sign-in?email=${encodeURIComponent(user.email)}`);
     await sendMail({
       to: user.email,
       ...invitationMessage({

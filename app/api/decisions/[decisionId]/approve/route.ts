@@ -20,7 +20,6 @@ export const POST = route(async (request, { params }: Context) => {
     project,
     decision,
     { clientName: actor.name ?? actor.email, optionLabel: option.label, approved: true },
-    request.headers.get("origin") ?? undefined,
   );
   return NextResponse.json(await getDecisionView(actor, decisionId));
 });

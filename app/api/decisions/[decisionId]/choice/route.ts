@@ -21,7 +21,6 @@ export const POST = route(async (request, { params }: Context) => {
       project,
       decision,
       { clientName: actor.name ?? actor.email, optionLabel: option.label, approved: false },
-      request.headers.get("origin") ?? undefined,
     );
   }
   // The decision as this write left it: no need to look up who may see it a third time.

@@ -11,6 +11,6 @@ export const POST = route(async (request, { params }: Context) => {
   const actor = await requireApiUser("designer");
   const { decisionId } = await params;
   const { decision, project } = await markDecisionSent(actor, decisionId);
-  await notifyDecisionWaiting(project, decision, request.headers.get("origin") ?? undefined);
+  await notifyDecisionWaiting(project, decision);
   return NextResponse.json({ sent: true });
 });

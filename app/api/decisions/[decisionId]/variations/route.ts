@@ -16,8 +16,7 @@ export const POST = route(async (request, { params }: Context) => {
   const input = variationRequestSchema.parse(await readJson(request));
   const { project, decision, variation, role } = await requestVariation(actor, decisionId, input);
   // The designers price it; when a designer asked, the clients hear of it too.
-  const origin = request.headers.get("origin") ?? undefined;
-  await notifyVariation(project, decision, variation.id, "requested", "staff", origin);
-  if (role === "staff") await notifyVariation(project, decision, variation.id, "requested", "clients", origin);
+  await notifyVariation(project, decision, variation.id, "requested", "staff");
+  if (role === "staff") await notifyVariation(project, decision, variation.id, "requested", "clients");
   return NextResponse.json({ variation }, { status: 201 });
 });

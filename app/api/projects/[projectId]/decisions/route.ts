@@ -26,6 +26,6 @@ export const POST = route(async (request, { params }: Context) => {
   await getProjectForStaff(actor, projectId);
   const input = createDecisionSchema(todayUtc()).parse(await readJson(request));
   const { decision, project } = await createDecision(actor, projectId, input);
-  if (input.notify) await notifyDecisionWaiting(project, decision, request.headers.get("origin") ?? undefined);
+  if (input.notify) await notifyDecisionWaiting(project, decision);
   return NextResponse.json(await getDecisionView(actor, decision.id), { status: 201 });
 });

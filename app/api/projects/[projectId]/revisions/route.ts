@@ -17,7 +17,7 @@ export const GET = route(async (_request: Request, { params }: Context) => {
 export const POST = route(async (request: Request, { params }: Context) => {
   const actor = await requireApiUser("designer");
   const { projectId } = await params;
-  const issued = await issueRevisionAndNotify(actor, projectId, new URL(request.url).origin);
+  const issued = await issueRevisionAndNotify(actor, projectId);
   const { id, letter, sequence, sha256, issuedAt } = issued.revision;
   return NextResponse.json(
     { id, letter, sequence, sha256, issuedAt, lineCount: issued.lines.length, notified: issued.notified },

@@ -9,7 +9,7 @@ type Context = { params: Promise<{ revisionId: string }> };
 export const POST = route(async (request: Request, { params }: Context) => {
   const actor = await requireApiUser("supplier");
   const { revisionId } = await params;
-  const result = await acknowledgeRevisionAndNotify(actor, revisionId, new URL(request.url).origin);
+  const result = await acknowledgeRevisionAndNotify(actor, revisionId);
   const { supplierId, acknowledgedAt } = result.acknowledgement;
   return NextResponse.json(
     { revisionId: result.revision.id, letter: result.revision.letter, supplierId, acknowledgedAt, created: result.created },

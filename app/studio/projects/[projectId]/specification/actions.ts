@@ -1,7 +1,6 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
-import { headers } from "next/headers";
 import { redirect } from "next/navigation";
 import { createFixedItem, deleteFixedItem, updateFixedItem } from "@/db/queries/spec-fixed-items";
 import { failure, formValues, type ActionResult } from "@/lib/actions/result";
@@ -18,8 +17,7 @@ export async function issueRevisionAction(projectId: string, _prev: ActionResult
   try {
     const actor = await requireApiUser("designer");
     await getProjectForStaff(actor, projectId);
-    const origin = (await headers()).get("origin") ?? undefined;
-    const issued = await issueRevisionAndNotify(actor, projectId, origin);
+    const issued = await issueRevisionAndNotify(actor, projectId);
     revisionId = issued.revision.id;
   } catch (error) {
     return failure(error);

@@ -14,6 +14,6 @@ export const POST = route(async (request, { params }: Context) => {
   await getVariationAccess(actor, decisionId, variationId);
   const input = variationApproveSchema.parse(await readJson(request));
   const { project, decision, variation } = await approveVariation(actor, decisionId, variationId, input);
-  await notifyVariation(project, decision, variation.id, "approved", "staff", request.headers.get("origin") ?? undefined);
+  await notifyVariation(project, decision, variation.id, "approved", "staff");
   return NextResponse.json({ variation });
 });

@@ -14,6 +14,6 @@ export const POST = route(async (request, { params }: Context) => {
   await getVariationAccess(actor, decisionId, variationId);
   const input = variationPriceSchema.parse(await readJson(request));
   const { project, decision, variation } = await priceVariation(actor, decisionId, variationId, input);
-  await notifyVariation(project, decision, variation.id, "priced", "clients", request.headers.get("origin") ?? undefined);
+  await notifyVariation(project, decision, variation.id, "priced", "clients");
   return NextResponse.json({ variation });
 });
