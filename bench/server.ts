@@ -1,18 +1,20 @@
 import { spawn, type ChildProcess } from "node:child_process";
 import { readFileSync } from "node:fs";
 import { encode } from "next-auth/jwt";
-import { freePort, waitForHttp } from "../scripts/lib/processes";
+import { freePort, serveCommand, waitForHttp } from "../scripts/lib/processes";
 
 export const BENCH_SECRET = "bench-secret-bench-secret-bench-secret-0123";
 
-/** `next start` of the production build in `distDir`, on a free port, with the benchmark database. */
+/** Mottle's production server (scripts/serve.ts) on the build in `distDir`, on a free port, with the benchmark database. */
 export async function startBenchServer(distDir: string, databaseUrl: string, uploadsDir: string, smtpUrl: string) {
   const port = await freePort();
-  const child: ChildProcess = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-p", String(port), "-H", "127.0.0.1"], {
+  const [command, args] = serveCommand(port);
+  const child: ChildProcess = spawn(command, args, {
     stdio: ["ignore", "ignore", "inherit"],
     env: {
       ...process.env,
       NEXT_TELEMETRY_DISABLED: "1",
+      NODE_ENV: "production",
       NEXT_DIST_DIR: distDir,
       MOTTLE_MODE: "test",
       DATABASE_URL: databaseUrl,

@@ -85,6 +85,9 @@ export const env = loadEnv();
  * X-Forwarded-Host and Origin are the caller's to forge).
  */
 export const publicOrigin = new URL(env.APP_URL ?? `http://127.0.0.1:${env.PORT}`).origin;
+// Auth.js's own URL setting: with it, Auth.js builds sign-in links and its endpoints' URLs on this
+// origin instead of trusting Host / X-Forwarded-Host (AUTH_TRUST_HOST then only lets it run).
+process.env.AUTH_URL = publicOrigin;
 
 /** The dev mail inbox and other conveniences exist only outside production. */
 export const isDevLike = env.MOTTLE_MODE !== "production";

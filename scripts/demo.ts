@@ -17,11 +17,11 @@ await run("npx", ["next", "build"], { ...process.env, NEXT_TELEMETRY_DISABLED: "
 const server = await startNext(port, { ...process.env, AUTH_TRUST_HOST: "true" });
 
 console.log(`
-Mottle demo studio: http://localhost:${port}
+Mottle demo studio: http://127.0.0.1:${port}
   Studio (password mottle-demo): owner@demo.example, designer@demo.example, other@demo.example (another studio)
   Clients (e-mail link):         client@demo.example, client2@demo.example
   Suppliers (e-mail link):       stone@, joinery@, flooring@, tiles@, lighting@, appliances@demo.example
-  Caught mail (sign-in links):   http://localhost:${port}/dev/mail
+  Caught mail (sign-in links):   http://127.0.0.1:${port}/dev/mail
 `);
 
 stopOnSignals(async () => {

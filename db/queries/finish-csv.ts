@@ -6,7 +6,8 @@ import { writeTransaction } from "./serial-write";
 import { finishes, suppliers } from "@/db/schema";
 import { HttpError } from "@/lib/http";
 import { roundLab, settleColour } from "@/lib/validation/finish-colour";
-import { csvColumns, csvInfoColumns, guardCell, readCsvHeader, readCsvRow, requiredCsvColumns, type CsvColumn } from "@/lib/validation/finish-csv";
+import { neutraliseCell } from "@/lib/csv-cell";
+import { csvColumns, csvInfoColumns, readCsvHeader, readCsvRow, requiredCsvColumns, type CsvColumn } from "@/lib/validation/finish-csv";
 import type { FinishInput } from "@/lib/validation/finish";
 import { writeAudit } from "./audit";
 import { requireStudioId } from "./finishes";
@@ -27,7 +28,7 @@ export async function exportFinishesCsv(actor: Actor): Promise<string> {
   const records = rows.map(({ finish, supplierName }) => {
     const f = toFinishSummary({ ...finish, supplierName });
     const [L, a, b] = roundLab(f.lab);
-    const text = (v: string | null) => guardCell(v ?? "");
+    const text = (v: string | null) => neutraliseCell(v ?? "");
     return [
       text(f.name), f.category, text(f.supplierName), text(f.productCode), text(f.surface), text(f.format), text(f.unit),
       (f.unitPriceCents / 100).toFixed(2), String(f.leadTimeDays),

@@ -11,3 +11,9 @@ export async function sendMail(message: { to: string | string[]; subject: string
 export function appUrl(path: string) {
   return new URL(path, publicOrigin).toString();
 }
+
+/** A link someone else built (Auth.js's sign-in link), moved onto the public origin: only its path and query are kept. */
+export function onPublicOrigin(url: string) {
+  const { pathname, search } = new URL(url);
+  return appUrl(pathname + search);
+}

@@ -1,4 +1,5 @@
 import { stringify } from "csv-stringify/sync";
+import { neutraliseCell } from "@/lib/csv-cell";
 import { cautionTitles } from "./caution-notes";
 import type { SpecLineContent } from "./types";
 
@@ -21,14 +22,6 @@ export const csvHeader = [
   "Expected on",
   "Line reference",
 ] as const;
-
-/**
- * A spreadsheet runs a cell that starts with = + - @ (or a tab or return) as a formula, so text
- * cells starting with one get a leading apostrophe (OWASP, "CSV Injection"). Numbers stay numbers.
- */
-export function neutraliseCell(value: string): string {
-  return /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
-}
 
 function text(value: string | null | undefined): string {
   return value ? neutraliseCell(value) : "";

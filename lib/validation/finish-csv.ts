@@ -1,3 +1,4 @@
+import { restoreCell } from "@/lib/csv-cell";
 import { cautions, isCautionKey } from "@/lib/cautions";
 import { finishCategoryKeys, finishCategoryLabels, finishInputSchema, parseMoneyText, type FinishInput } from "./finish";
 
@@ -45,15 +46,6 @@ export function readCsvHeader(header: string): CsvColumn | null {
   const key = header.trim().toLowerCase().replace(/\(|\)/g, " ").trim().replace(/[\s-]+/g, "_");
   if ((csvColumns as readonly string[]).includes(key)) return key as CsvColumn;
   return aliases[key] ?? null;
-}
-
-/** A spreadsheet would run a cell starting with = + - @ as a formula: export prefixes a quote (OWASP CSV injection). */
-export function guardCell(value: string): string {
-  return /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
-}
-
-function unguardCell(value: string): string {
-  return /^'[=+\-@\t\r]/.test(value) ? value.slice(1) : value;
 }
 
 function readCategory(text: string): string {
@@ -104,7 +96,7 @@ export type CsvRowResult = { ok: true; input: FinishInput; supplierName: string 
  * means the maker publishes only the LRV; errors name the column, as the designer sees it.
  */
 export function readCsvRow(cells: Partial<Record<CsvColumn, string>>): CsvRowResult {
-  const cell = (c: CsvColumn) => unguardCell((cells[c] ?? "").trim());
+  const cell = (c: CsvColumn) => restoreCell((cells[c] ?? "").trim());
   const errors: string[] = [];
   const price = parseMoneyText(cell("unit_price"));
   if (price === null) errors.push(`unit_price: "${cell("unit_price")}" isn't an amount of dollars, like 680 or 680.50.`);

@@ -12,11 +12,17 @@ export function run(command: string, args: string[], env: NodeJS.ProcessEnv = pr
   });
 }
 
-/** Starts `next start` on a port and waits until it answers. */
+/** The command line of Mottle's own server (scripts/serve.ts); the child is node itself, so a signal reaches it. */
+export function serveCommand(port: number, host = "127.0.0.1", dev = false): [string, string[]] {
+  return [process.execPath, ["--import", "tsx", "scripts/serve.ts", "--port", String(port), "--hostname", host, ...(dev ? ["--dev"] : [])]];
+}
+
+/** Starts the production server (scripts/serve.ts) on a port and waits until it answers. */
 export async function startNext(port: number, env: NodeJS.ProcessEnv, quiet = false, host?: string): Promise<ChildProcess> {
-  const child = spawn("npx", ["next", "start", "-p", String(port), ...(host ? ["-H", host] : [])], {
+  const [command, args] = serveCommand(port, host);
+  const child = spawn(command, args, {
     stdio: quiet ? ["ignore", "ignore", "inherit"] : "inherit",
-    env: { ...env, NEXT_TELEMETRY_DISABLED: "1", PORT: String(port) },
+    env: { ...env, NEXT_TELEMETRY_DISABLED: "1", NODE_ENV: "production", PORT: String(port) },
     detached: false,
   });
   await waitForHttp(`http://127.0.0.1:${port}/sign-in`, 60_000, child);

@@ -8,7 +8,7 @@ import { checkIntegrity } from "@/db/backup";
 import { migrateDatabase } from "@/db/migrate";
 import { seedDemo } from "@/db/seed/demo";
 import { cookieFor } from "@/tests/support/personas";
-import { freePort, waitForHttp } from "@/scripts/lib/processes";
+import { freePort, serveCommand, waitForHttp } from "@/scripts/lib/processes";
 
 /**
  * Kills the production server with SIGKILL in the middle of a stream of writes (revision issues,
@@ -21,9 +21,10 @@ const databaseUrl = `file:${path.join(dir, "durable.db")}`;
 let server: ChildProcess | undefined;
 
 async function startServer(port: number) {
-  const child = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-p", String(port), "-H", "127.0.0.1"], {
+  const [command, args] = serveCommand(port);
+  const child = spawn(command, args, {
     stdio: ["ignore", "ignore", "inherit"],
-    env: { ...process.env, DATABASE_URL: databaseUrl, UPLOADS_DIR: path.join(dir, "uploads"), SMTP_URL: "smtp://127.0.0.1:9" },
+    env: { ...process.env, NODE_ENV: "production", DATABASE_URL: databaseUrl, UPLOADS_DIR: path.join(dir, "uploads"), SMTP_URL: "smtp://127.0.0.1:9" },
   });
   await waitForHttp(`http://127.0.0.1:${port}/api/health`, 60_000, child);
   return child;

@@ -10,7 +10,7 @@ export async function callRoute<P extends Record<string, string>>(
 ) {
   const request = new Request(`http://test${path}`, {
     method: init.method ?? "GET",
-    headers: init.body === undefined ? undefined : { "content-type": "application/json" },
+    headers: init.body === undefined ? { origin: "http://mottle.test" } : { "content-type": "application/json", origin: "http://mottle.test" },
     body: init.body === undefined ? undefined : JSON.stringify(init.body),
   });
   const res = await handler(request, { params: Promise.resolve(params) });

@@ -206,7 +206,7 @@ describe("boards per room", () => {
 
   it("answers 400 to a body that is not JSON and to an unknown light", async () => {
     actAs("designer");
-    const res = await changeItem(new Request(`http://test/api/boards/${BOARD}/items/demo-item-tap`, { method: "PATCH", body: "{oops" }), {
+    const res = await changeItem(new Request(`http://test/api/boards/${BOARD}/items/demo-item-tap`, { method: "PATCH", headers: { "content-type": "application/json", origin: "http://mottle.test" }, body: "{oops" }), {
       params: Promise.resolve({ boardId: BOARD, itemId: "demo-item-tap" }),
     });
     expect(res.status).toBe(400);

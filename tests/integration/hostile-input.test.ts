@@ -83,7 +83,7 @@ describe("hostile input to every write route", () => {
       fc.asyncProperty(hostileBody, async (body) => {
         cases++;
         const before = await rowCounts();
-        const res = await handler(new Request(`http://test${path}`, { method: route.method, headers: { "content-type": "application/json" }, body }), { params: Promise.resolve(params) });
+        const res = await handler(new Request(`http://test${path}`, { method: route.method, headers: { "content-type": "application/json", origin: "http://mottle.test" }, body }), { params: Promise.resolve(params) });
         expect(res.status, `${key} answered ${res.status} to ${body.slice(0, 120)}`).toBeLessThan(500);
         if (res.status >= 400) {
           const json = (await res.json()) as { error?: unknown };

@@ -130,10 +130,10 @@ describe("POST /api/finishes", () => {
     expect(res.body.fieldErrors).toEqual({ supplierId: ["Choose one of your studio's suppliers."] });
   });
 
-  it("answers 400 for a body that isn't JSON", async () => {
+  it("answers 415 for a body that isn't declared JSON (RFC 9110 §15.5.16)", async () => {
     const res = await call("designer", create, "/api/finishes", { text: "name=x" });
-    expect(res.status).toBe(400);
-    expect(res.body.error).toMatch(/must be JSON/);
+    expect(res.status).toBe(415);
+    expect(res.body.error).toMatch(/as JSON/);
   });
 
   it.each<[Persona, number]>([

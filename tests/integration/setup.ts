@@ -18,6 +18,8 @@ Object.assign(process.env, {
   UPLOADS_DIR: path.join(dir, "uploads"),
   SMTP_URL: `smtp://127.0.0.1:${catcher.port}`,
   AUTH_SECRET: "integration-tests-secret-integration-tests-secret",
+  // Every e-mailed link and every write's Origin is measured against this (lib/env.ts publicOrigin).
+  APP_URL: "http://mottle.test",
 });
 
 const { migrateDatabase } = await import("@/db/migrate");

@@ -68,7 +68,7 @@ describe("supplier hand-off", () => {
   it("e-mails the studio once when a supplier acknowledges, with a link to the hand-off", async () => {
     const mail = await mailTo("designer@demo.example", "acknowledged revision B");
     expect(mail).toHaveLength(1);
-    expect(mail[0]?.links).toContain(`http://test/studio/projects/${project}/handoff`);
+    expect(mail[0]?.links).toContain(`http://mottle.test/studio/projects/${project}/handoff`);
     expect(await mailTo("owner@demo.example", "acknowledged revision B")).toHaveLength(1);
   });
 

@@ -19,7 +19,9 @@ type Handler<P> = (request: Request, context: { params: Promise<P> }) => Promise
 export async function call<P>(handler: Handler<P>, params: P, init: { method?: string; path?: string; body?: unknown } = {}) {
   const request = new Request(`http://test${init.path ?? "/api"}`, {
     method: init.method ?? "GET",
-    ...(init.body === undefined ? {} : { body: JSON.stringify(init.body), headers: { "content-type": "application/json" } }),
+    ...(init.body === undefined
+      ? { headers: { origin: "http://mottle.test" } }
+      : { body: JSON.stringify(init.body), headers: { "content-type": "application/json", origin: "http://mottle.test" } }),
   });
   const response = await handler(request, { params: Promise.resolve(params) });
   const text = await response.text();

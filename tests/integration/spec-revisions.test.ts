@@ -142,7 +142,7 @@ describe("issuing revisions", () => {
       mail = await readCaughtMail(dir, { to: "stone@demo.example" });
     }
     const message = mail.find((m) => m.subject.includes(`Revision ${String(res.body.letter)} issued`));
-    expect(message?.links).toContain(`http://test/supplier/revisions/${String(res.body.id)}`);
+    expect(message?.links).toContain(`http://mottle.test/supplier/revisions/${String(res.body.id)}`);
     expect(message?.text).toContain("2 lines");
     // Joinery and tiles have nothing locked yet, so they hear nothing.
     expect((await readCaughtMail(dir, { to: "joinery@demo.example" })).filter((m) => m.subject.includes("issued"))).toEqual([]);

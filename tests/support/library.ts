@@ -19,7 +19,7 @@ export async function call<P extends Record<string, string>>(
   init: { method?: string; json?: unknown; form?: FormData; text?: string; params?: P } = {},
 ): Promise<Answer> {
   actAs(persona);
-  const headers = new Headers();
+  const headers = new Headers({ origin: "http://mottle.test" });
   let body: BodyInit | undefined;
   if (init.json !== undefined) {
     headers.set("content-type", "application/json");

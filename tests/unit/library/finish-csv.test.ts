@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { guardCell, readCsvHeader, readCsvRow } from "@/lib/validation/finish-csv";
+import { neutraliseCell as guardCell } from "@/lib/csv-cell";
+import { readCsvHeader, readCsvRow } from "@/lib/validation/finish-csv";
 
 const row = {
   name: "Dove Wall Paint",

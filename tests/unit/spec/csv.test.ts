@@ -1,7 +1,8 @@
 import { parse } from "csv-parse/sync";
 import { describe, expect, it } from "vitest";
 import { cautionTitles } from "@/lib/spec/caution-notes";
-import { csvFileName, csvHeader, neutraliseCell, specLinesCsv } from "@/lib/spec/csv";
+import { neutraliseCell } from "@/lib/csv-cell";
+import { csvFileName, csvHeader, specLinesCsv } from "@/lib/spec/csv";
 import type { SpecLineContent } from "@/lib/spec/types";
 import { sampleLines } from "./fixtures";
 

@@ -2,23 +2,30 @@ import { NextResponse } from "next/server";
 import { importFinishesCsv } from "@/db/queries/finish-csv";
 import { requireApiUser } from "@/lib/auth/session";
 import { HttpError, route } from "@/lib/http";
+import { readBodyWithin } from "@/lib/request-body";
 
 const MAX_CSV_BYTES = 5 * 1024 * 1024;
 
-/** The CSV as multipart (field `file`) or as a text/csv body. */
+const csvTooLarge = () => new HttpError(413, "That file is larger than 5 MB. Split it and import the parts one by one.");
+
+/** The CSV as multipart (field `file`) or as a text/csv body; the body is read no further than the limit. */
 async function readCsvText(request: Request): Promise<string> {
-  const length = Number(request.headers.get("content-length") ?? NaN);
-  if (Number.isFinite(length) && length > MAX_CSV_BYTES) throw new HttpError(413, "That file is larger than 5 MB. Split it and import the parts one by one.");
-  const type = request.headers.get("content-type") ?? "";
+  const type = (request.headers.get("content-type") ?? "").toLowerCase();
+  const multipart = type.startsWith("multipart/form-data");
+  if (!multipart && !type.startsWith("text/csv") && !type.startsWith("text/plain")) {
+    throw new HttpError(415, "Send the CSV as a file (multipart/form-data) or as text/csv.");
+  }
+  // Room for the multipart boundary and part headers around the file.
+  const body = await readBodyWithin(request, MAX_CSV_BYTES + 64 * 1024, csvTooLarge);
   let text: string;
-  if (type.startsWith("multipart/form-data")) {
-    const file = (await request.formData().catch(() => null))?.get("file");
+  if (multipart) {
+    const file = (await new Response(body, { headers: { "content-type": type } }).formData().catch(() => null))?.get("file");
     if (!file || typeof file === "string") throw new HttpError(400, "Choose a CSV file to import.", { file: ["Choose a CSV file to import."] });
     text = await file.text();
   } else {
-    text = await request.text();
+    text = new TextDecoder().decode(body);
   }
-  if (text.length > MAX_CSV_BYTES) throw new HttpError(413, "That file is larger than 5 MB. Split it and import the parts one by one.");
+  if (text.length > MAX_CSV_BYTES) throw csvTooLarge();
   return text;
 }
 
