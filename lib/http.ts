@@ -1,34 +1,12 @@
 import { NextResponse } from "next/server";
 import { ZodError } from "zod";
+import { fieldErrorsOf, HttpError } from "@/lib/http-error";
 import { allowedOrigins } from "@/lib/origins";
 import { readBodyWithin } from "@/lib/request-body";
+import { MAX_JSON_BYTES } from "@/lib/server/edge";
 
-export type FieldErrors = Record<string, string[]>;
-
-/** An error that is the caller's to fix (or not theirs to see); its message is safe to show. */
-export class HttpError extends Error {
-  constructor(
-    readonly status: number,
-    message: string,
-    readonly fieldErrors?: FieldErrors,
-  ) {
-    super(message);
-  }
-}
-
-export const unauthorised = () => new HttpError(401, "Sign in to continue.");
-export const forbidden = () => new HttpError(403, "You don't have access to this.");
-export const notFound = (what = "That") => new HttpError(404, `${what} was not found.`);
-export const conflict = (message: string) => new HttpError(409, message);
-
-export function fieldErrorsOf(error: ZodError): FieldErrors {
-  const out: FieldErrors = {};
-  for (const issue of error.issues) {
-    const key = issue.path.join(".") || "_";
-    (out[key] ??= []).push(issue.message);
-  }
-  return out;
-}
+// Errors are safe to import anywhere (client components too); the rest of this file is server-side.
+export * from "@/lib/http-error";
 
 export function errorResponse(error: unknown): NextResponse {
   if (error instanceof HttpError) {
@@ -76,8 +54,7 @@ export function route<C>(handler: Handler<C>): Handler<C> {
   };
 }
 
-/** The most JSON any route takes: a board or a decision with every option is a few kilobytes. */
-export const MAX_JSON_BYTES = 256 * 1024;
+export { MAX_JSON_BYTES };
 
 /**
  * Reads a JSON body: 415 unless it is declared application/json (a text/plain body is what a

@@ -6,7 +6,7 @@ import { freePort, run, startNext } from "./lib/processes";
 
 /**
  * Browser tests against the production build: a fresh seeded database and mail catcher in a
- * temporary folder, `next start` on a free port, then vitest with tests/e2e.
+ * temporary folder, Mottle's server (scripts/serve.ts) on a free port, then vitest with tests/e2e.
  */
 const dir = mkdtempSync(path.join(tmpdir(), "mottle-e2e-"));
 const port = await freePort();
@@ -22,6 +22,8 @@ const env: NodeJS.ProcessEnv = {
   AUTH_TRUST_HOST: "true",
   // Known to the tests, so the permission matrix can sign its own session cookies.
   AUTH_SECRET: "e2e-secret-e2e-secret-e2e-secret-e2e-secret",
+  // The public origin every e-mailed link and every write's Origin is measured against.
+  APP_URL: `http://127.0.0.1:${port}`,
   E2E_BASE_URL: `http://127.0.0.1:${port}`,
   E2E_CATCHER_PORT: String(catcherPort),
 };

@@ -28,10 +28,12 @@ await app.prepare();
 const handle = app.getRequestHandler();
 
 const server = createServer((req, res) => {
-  const refusal = refuseAtEdge(req.url, req.headers["content-length"]);
+  const refusal = refuseAtEdge(req.url, req.headers["content-length"], req.headers["content-type"]);
   if (refusal) {
     res.writeHead(refusal.status, { "content-type": "application/json", connection: "close" });
     res.end(JSON.stringify({ error: refusal.error }));
+    // Read and drop whatever body follows, so the caller gets the answer instead of a reset connection.
+    req.resume();
     return;
   }
   const address = resolveClientAddress(req.socket.remoteAddress, headerText(req.headers["x-forwarded-for"]), hops);

@@ -46,18 +46,22 @@ export type EdgeRefusal = { status: number; error: string };
 /** The most any request may carry: a photo upload plus its form fields. Larger bodies never reach a route. */
 export const MAX_REQUEST_BYTES = 16 * 1024 * 1024;
 
+/** The most JSON any route takes: a board or a decision with every option is a few kilobytes. */
+export const MAX_JSON_BYTES = 256 * 1024;
+
 /**
  * Requests refused before routing: a path whose percent-encoding is broken (Next answers those
- * with a 500) and a declared body larger than any route accepts.
+ * with a 500) and a declared body larger than any route accepts (JSON has the smaller limit).
  */
-export function refuseAtEdge(rawUrl: string | undefined, contentLength: string | undefined): EdgeRefusal | null {
+export function refuseAtEdge(rawUrl: string | undefined, contentLength: string | undefined, contentType?: string): EdgeRefusal | null {
   const path = (rawUrl ?? "/").split("?")[0] ?? "/";
   try {
     decodeURIComponent(path);
   } catch {
     return { status: 400, error: "That address is not valid: it has a broken %-encoding." };
   }
-  if (contentLength !== undefined && Number(contentLength) > MAX_REQUEST_BYTES) {
+  const json = (contentType ?? "").toLowerCase().startsWith("application/json");
+  if (contentLength !== undefined && Number(contentLength) > (json ? MAX_JSON_BYTES : MAX_REQUEST_BYTES)) {
     return { status: 413, error: "That request is too large." };
   }
   return null;

@@ -55,15 +55,20 @@ export async function signInWithLink(page: Page, email: string) {
 }
 
 async function waitForLink(email: string, since: number): Promise<string> {
+  return waitForMailLink(email, since, (l) => l.includes("/api/auth/callback/nodemailer"));
+}
+
+/** The first link matching `wanted` in mail to `email` caught since `since` (ms), waiting up to 20 s. */
+export async function waitForMailLink(email: string, since: number, wanted: (link: string) => boolean): Promise<string> {
   for (let i = 0; i < 80; i++) {
     const res = await fetch(`${baseUrl}/api/dev/mail?to=${encodeURIComponent(email)}`);
     const messages = (await res.json()) as Caught[];
     const link = messages
       .filter((m) => Date.parse(m.receivedAt) >= since)
       .flatMap((m) => m.links)
-      .find((l) => l.includes("/api/auth/callback/nodemailer"));
+      .find(wanted);
     if (link) return link;
     await new Promise((r) => setTimeout(r, 250));
   }
-  throw new Error(`no sign-in link reached ${email}`);
+  throw new Error(`no matching link reached ${email}`);
 }

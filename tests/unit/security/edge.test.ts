@@ -43,3 +43,12 @@ describe("requests refused before routing", () => {
     expect(refuseAtEdge("/api/uploads", String(MAX_REQUEST_BYTES))).toBeNull();
   });
 });
+
+describe("JSON bodies at the edge", () => {
+  it("refuses a declared JSON body past the JSON limit, whatever the charset parameter", async () => {
+    const { MAX_JSON_BYTES } = await import("@/lib/server/edge");
+    expect(refuseAtEdge("/api/finishes", String(MAX_JSON_BYTES + 1), "application/json; charset=utf-8")?.status).toBe(413);
+    expect(refuseAtEdge("/api/finishes", String(MAX_JSON_BYTES), "application/json")).toBeNull();
+    expect(refuseAtEdge("/api/uploads", String(MAX_JSON_BYTES + 1), "multipart/form-data; boundary=x")).toBeNull();
+  });
+});

@@ -1,16 +1,18 @@
 import type { Metadata } from "next";
+import { headers } from "next/headers";
 import { notFound } from "next/navigation";
 import { PublicShell } from "@/components/layout/public-shell";
 import { EmptyState } from "@/components/ui";
-import { env, isDevLike } from "@/lib/env";
+import { mayReadDevInbox } from "@/lib/dev-inbox";
+import { env } from "@/lib/env";
 import { readCaughtMail } from "@/lib/mail/caught";
 
 export const metadata: Metadata = { title: "Caught mail" };
 export const dynamic = "force-dynamic";
 
-/** Development and demo only: every e-mail the app sent, so a person can click a sign-in link. */
+/** Development and demo only, and only to this machine: every e-mail the app sent, so a person can click a sign-in link. */
 export default async function CaughtMailPage() {
-  if (!isDevLike) notFound();
+  if (!mayReadDevInbox(await headers())) notFound();
   const messages = await readCaughtMail(env.MAIL_CATCHER_DIR, { limit: 50 });
   return (
     <PublicShell title="Caught mail" intro="Demo and development only: e-mail the app has sent, newest first. Nothing here left this machine.">

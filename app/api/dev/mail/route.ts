@@ -1,13 +1,14 @@
 import { NextResponse } from "next/server";
-import { env, isDevLike } from "@/lib/env";
+import { mayReadDevInbox } from "@/lib/dev-inbox";
+import { env } from "@/lib/env";
 import { readCaughtMail } from "@/lib/mail/caught";
 import { notFound, route } from "@/lib/http";
 
 export const dynamic = "force-dynamic";
 
-/** Development and demo only: the mail catcher's messages, newest first. In production: 404. */
+/** Development and demo only, and only to this machine: the mail catcher's messages, newest first. Otherwise 404. */
 export const GET = route(async (request: Request) => {
-  if (!isDevLike) throw notFound("That page");
+  if (!mayReadDevInbox(request.headers)) throw notFound("That page");
   const to = new URL(request.url).searchParams.get("to") ?? undefined;
   const messages = await readCaughtMail(env.MAIL_CATCHER_DIR, { to, limit: 100 });
   return NextResponse.json(
