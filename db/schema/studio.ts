@@ -30,7 +30,22 @@ export const studioMembers = sqliteTable(
 );
 export type StudioMember = typeof studioMembers.$inferSelect;
 
-export const trades = ["stone", "joinery", "flooring", "tiles", "tapware", "hardware", "lighting", "appliances", "paint"] as const;
+/** What a supplier or trade does (labels in lib/suppliers/trades.ts). The first nine are the original keys; keep them. */
+export const trades = [
+  "stone",
+  "joinery",
+  "flooring",
+  "tiles",
+  "tapware",
+  "hardware",
+  "lighting",
+  "appliances",
+  "paint",
+  "electrician",
+  "plumber",
+  "builder",
+  "other",
+] as const;
 export type Trade = (typeof trades)[number];
 
 export const suppliers = sqliteTable(
@@ -44,11 +59,36 @@ export const suppliers = sqliteTable(
     trade: text("trade", { enum: trades }).notNull(),
     email: text("email"),
     phone: text("phone"),
+    /** The studio's account number with this supplier, quoted on orders. */
+    accountNumber: text("account_number"),
+    notes: text("notes"),
+    /** Archived suppliers keep their history but are offered nowhere new. */
+    archivedAt: integer("archived_at", { mode: "timestamp_ms" }),
     createdAt: createdAt(),
   },
   (t) => [index("supplier_studio_idx").on(t.studioId)],
 );
 export type Supplier = typeof suppliers.$inferSelect;
+
+/** The people at a supplier the studio deals with. Inviting one to a project is separate (project_member). */
+export const supplierContacts = sqliteTable(
+  "supplier_contact",
+  {
+    id: id(),
+    supplierId: text("supplier_id")
+      .notNull()
+      .references(() => suppliers.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    email: text("email"),
+    phone: text("phone"),
+    /** What they do there, in the studio's words: "Sales", "Accounts", "Site measure". */
+    role: text("role"),
+    sortOrder: integer("sort_order").notNull().default(0),
+    createdAt: createdAt(),
+  },
+  (t) => [index("supplier_contact_supplier_idx").on(t.supplierId)],
+);
+export type SupplierContact = typeof supplierContacts.$inferSelect;
 
 export const projects = sqliteTable(
   "project",
