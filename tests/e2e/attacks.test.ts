@@ -105,6 +105,26 @@ describe("sign-in links and every e-mailed link use the configured origin", () =
     const link = await waitForMailLink("client@demo.example", since, (l) => l.includes("/client/decisions/demo-decision-ensuite-floor"));
     expect(onOurOrigin(link)).toBe(true);
   });
+
+  it("a client's pick and a variation request, posted with a forged Host and X-Forwarded-Host, e-mail the studio links to us", async () => {
+    const since = Date.now() - 1000;
+    const cookie = (await cookieFor("client", secret)) ?? "";
+    const forged = { host: EVIL, "x-forwarded-host": EVIL, "x-forwarded-proto": "https", origin: ours.origin, cookie, "content-type": "application/json" };
+    const pick = await raw("POST", "/api/decisions/demo-decision-kitchen-pendant/choice", forged, JSON.stringify({ optionId: "demo-option-kp-opal", comment: "The opal, please" }));
+    expect(pick.status).toBe(200);
+    const request = await raw("POST", "/api/decisions/demo-decision-laundry-benchtop/variations", forged, JSON.stringify({ reason: "Could we price a pencil-round edge instead?" }));
+    expect(request.status).toBeLessThan(300);
+    const chose = await waitForMailLink("designer@demo.example", since, (l) => l.includes("/decisions/demo-decision-kitchen-pendant"));
+    const varied = await waitForMailLink("designer@demo.example", since, (l) => l.includes("/variations/"));
+    expect([chose, varied].every(onOurOrigin)).toBe(true);
+  });
+
+  it("no e-mail caught during these attacks links anywhere but our origin", async () => {
+    const messages = (await (await fetch(`${baseUrl}/api/dev/mail`)).json()) as { links: string[] }[];
+    const links = messages.flatMap((m) => m.links).filter((l) => /^https?:/.test(l));
+    expect(links.length).toBeGreaterThan(0);
+    expect(links.filter((l) => !onOurOrigin(l))).toEqual([]);
+  });
 });
 
 describe("cross-site writes", () => {
