@@ -1,17 +1,21 @@
 "use client";
 
-import { useActionState } from "react";
+import { useActionState, useRef } from "react";
 import { requestSignInLink, signInWithPassword } from "@/app/(public)/sign-in/actions";
 import { FormMessage } from "@/components/auth/form-message";
+import { fieldToFix, useFocusProblem } from "@/components/auth/use-focus-problem";
 import { Button, Field, fieldIds, Input } from "@/components/ui";
-import { idle } from "@/lib/actions/result";
+import { idle, keptValue, type ActionResult } from "@/lib/actions/result";
 
 export function LinkSignInForm({ callbackUrl, defaultEmail }: { callbackUrl: string; defaultEmail?: string }) {
-  const [state, action, pending] = useActionState(requestSignInLink, idle);
+  const [state, action, pending] = useActionState<ActionResult, FormData>(requestSignInLink, idle);
+  const form = useRef<HTMLFormElement>(null);
   const errors = state.ok ? undefined : state.fieldErrors;
   const ids = fieldIds("link-email");
+  const fix = fieldToFix(state, ["email"], "email");
+  useFocusProblem(form, state, fix);
   return (
-    <form action={action} className="space-y-4 rounded-lg border border-line bg-card p-5" noValidate>
+    <form ref={form} action={action} className="space-y-4 rounded-lg border border-line bg-card p-5" noValidate>
       <h2 className="font-display text-xl">E-mail me a sign-in link</h2>
       <input type="hidden" name="callbackUrl" value={callbackUrl} />
       <Field label="E-mail address" htmlFor="link-email" error={errors?.email}>
@@ -20,7 +24,8 @@ export function LinkSignInForm({ callbackUrl, defaultEmail }: { callbackUrl: str
           name="email"
           type="email"
           autoComplete="email"
-          defaultValue={defaultEmail}
+          defaultValue={keptValue(state, "email", defaultEmail)}
+          autoFocus={fix === "email"}
           required
           invalid={Boolean(errors?.email)}
           aria-describedby={errors?.email ? ids.errorId : undefined}
@@ -35,10 +40,14 @@ export function LinkSignInForm({ callbackUrl, defaultEmail }: { callbackUrl: str
 }
 
 export function PasswordSignInForm({ callbackUrl }: { callbackUrl: string }) {
-  const [state, action, pending] = useActionState(signInWithPassword, idle);
+  const [state, action, pending] = useActionState<ActionResult, FormData>(signInWithPassword, idle);
+  const form = useRef<HTMLFormElement>(null);
   const errors = state.ok ? undefined : state.fieldErrors;
+  // A wrong password (no field named) most likely needs the password typed again.
+  const fix = fieldToFix(state, ["email", "password"], !state.ok && state.status === 429 ? undefined : "password");
+  useFocusProblem(form, state, fix);
   return (
-    <form action={action} className="space-y-4 rounded-lg border border-line bg-card p-5" noValidate>
+    <form ref={form} action={action} className="space-y-4 rounded-lg border border-line bg-card p-5" noValidate>
       <h2 className="font-display text-xl">Studio staff: sign in with your password</h2>
       <input type="hidden" name="callbackUrl" value={callbackUrl} />
       <Field label="E-mail address" htmlFor="password-email" error={errors?.email}>
@@ -47,6 +56,8 @@ export function PasswordSignInForm({ callbackUrl }: { callbackUrl: string }) {
           name="email"
           type="email"
           autoComplete="username"
+          defaultValue={keptValue(state, "email")}
+          autoFocus={fix === "email"}
           required
           invalid={Boolean(errors?.email)}
           aria-describedby={errors?.email ? fieldIds("password-email").errorId : undefined}
@@ -58,6 +69,7 @@ export function PasswordSignInForm({ callbackUrl }: { callbackUrl: string }) {
           name="password"
           type="password"
           autoComplete="current-password"
+          autoFocus={fix === "password"}
           required
           invalid={Boolean(errors?.password)}
           aria-describedby={errors?.password ? fieldIds("password").errorId : undefined}

@@ -45,5 +45,6 @@ export type { TableProps } from "./table";
 export { Textarea } from "./textarea";
 export type { TextareaProps } from "./textarea";
 export { ToneIcon } from "./tone-icon";
+export { useRefusedFocus } from "./use-refused-focus";
 export type { Tone } from "./tone-icon";
 export { VisuallyHidden } from "./visually-hidden";

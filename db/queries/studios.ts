@@ -9,12 +9,19 @@ import { writeAudit } from "./audit";
 
 export const PASSWORD_COST = 11;
 
-/** Sign-up: a new studio with its owner, in one transaction. */
-export async function createStudioWithOwner(input: SignUpInput) {
-  const existing = await db.query.users.findFirst({ where: eq(users.email, input.email) });
-  if (existing) throw conflict("That e-mail address already has an account. Sign in instead.");
+export type SignUpOutcome = { created: true; studioId: string; userId: string } | { created: false };
+
+/**
+ * Sign-up: a new studio with its owner (and the password they chose), in one transaction. An
+ * address that already has an account changes nothing and says so only to the caller
+ * (`created: false`), never in its timing: the password is hashed either way, and both paths run
+ * one transaction in the write queue. What the person sees must not differ (sign-up/actions.ts).
+ */
+export async function createStudioWithOwner(input: SignUpInput): Promise<SignUpOutcome> {
   const passwordHash = await bcrypt.hash(input.password, PASSWORD_COST);
-  return writeTransaction(async (tx) => {
+  return writeTransaction(async (tx): Promise<SignUpOutcome> => {
+    const existing = await tx.query.users.findFirst({ where: eq(users.email, input.email), columns: { id: true } });
+    if (existing) return { created: false };
     const [studio] = await tx.insert(studios).values({ name: input.studioName }).returning();
     const [user] = await tx.insert(users).values({ email: input.email, name: input.name, passwordHash }).returning();
     if (!studio || !user) throw new Error("sign-up insert returned nothing");
@@ -23,7 +30,7 @@ export async function createStudioWithOwner(input: SignUpInput) {
       { studioId: studio.id, actorId: user.id, action: "studio.created", entityType: "studio", entityId: studio.id },
       tx,
     );
-    return { studio, user };
+    return { created: true, studioId: studio.id, userId: user.id };
   });
 }
 

@@ -11,6 +11,8 @@ export type Actor = {
   userId: string;
   email: string;
   name: string | null;
+  /** Sessions sealed with another number are over (db/queries/sessions.ts). */
+  sessionVersion: number;
   /** Set when the person is staff of a studio. */
   studio: { id: string; name: string; role: StudioRole } | null;
   /** Projects the person belongs to as a client or a supplier's contact. */
@@ -21,7 +23,8 @@ const cachedActor = readCache<Actor | null>("actor", 2000);
 
 /**
  * Everything the permission checks need about a signed-in person. Cached until the next write
- * (read-cache.ts), so a change of role or membership counts from the very next request.
+ * (read-cache.ts), so a change of role or membership, or an ended session, counts from the very
+ * next request.
  */
 export function getActor(userId: string): Promise<Actor | null> {
   return cachedActor(userId, () => readActor(userId));
@@ -46,7 +49,14 @@ async function readActor(userId: string): Promise<Actor | null> {
     .from(projectMembers)
     .innerJoin(projects, eq(projects.id, projectMembers.projectId))
     .where(eq(projectMembers.userId, userId));
-  return { userId: user.id, email: user.email, name: user.name, studio: staff ?? null, projects: memberships };
+  return {
+    userId: user.id,
+    email: user.email,
+    name: user.name,
+    sessionVersion: user.sessionVersion,
+    studio: staff ?? null,
+    projects: memberships,
+  };
 }
 
 /** Where a person lands after signing in: staff first, then client, then supplier. */

@@ -4,13 +4,19 @@ import { redirect } from "next/navigation";
 import { cache } from "react";
 import { getActor, type Actor } from "@/db/queries/users";
 import { forbidden, unauthorised } from "@/lib/http";
-import { sessionUserId } from "./index";
+import { sessionClaims } from "./index";
 import { isOwner, isStaff } from "./permissions";
+import { isSessionCurrent } from "./session-memo";
 
-/** The signed-in person, read once per request; null when signed out. */
+/**
+ * The signed-in person, read once per request; null when signed out, and null when the session
+ * was ended (sign-out, removal, a change of role) since its cookie was sealed.
+ */
 export const currentActor = cache(async (): Promise<Actor | null> => {
-  const userId = await sessionUserId();
-  return userId ? getActor(userId) : null;
+  const claims = await sessionClaims();
+  if (!claims) return null;
+  const actor = await getActor(claims.userId);
+  return actor && isSessionCurrent(claims, actor) ? actor : null;
 });
 
 async function signInPath() {

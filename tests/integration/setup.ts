@@ -28,16 +28,7 @@ const { client, db } = await migrateDatabase(process.env.DATABASE_URL ?? "");
 await seedDemo(db);
 client.close();
 
-vi.mock("@/lib/auth", async () => {
-  const { sessionStub } = await import("@/tests/support/session");
-  return {
-    auth: async () => sessionStub.current,
-    sessionUserId: async () => sessionStub.current?.user.id ?? null,
-    signIn: async () => undefined,
-    signOut: async () => undefined,
-    handlers: {},
-  };
-});
+vi.mock("@/lib/auth", async () => (await import("@/tests/support/session")).authModuleStub);
 
 afterAll(async () => {
   await catcher.close();

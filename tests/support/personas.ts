@@ -15,12 +15,15 @@ export const PERSONA_LABELS: Record<MatrixPersona, string> = {
   anonymous: "anonymous",
 };
 
-/** A session cookie as Auth.js would set it for a demo user (the test server's AUTH_SECRET signs it). */
+/**
+ * A session cookie as Auth.js would set it for a demo user (the test server's AUTH_SECRET signs it),
+ * sealed with session version 0: the seeded version, until that person signs out (db/queries/sessions.ts).
+ */
 export async function cookieFor(persona: MatrixPersona, secret: string): Promise<string | undefined> {
   if (persona === "anonymous") return undefined;
   const name = "authjs.session-token";
   const value = await encode({
-    token: { sub: `demo-user-${persona}`, email: `${persona}@demo.example` },
+    token: { sub: `demo-user-${persona}`, email: `${persona}@demo.example`, sessionVersion: 0 },
     secret,
     salt: name,
     maxAge: 3600,

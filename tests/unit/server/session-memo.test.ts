@@ -1,5 +1,5 @@
 import { describe, expect, it, vi } from "vitest";
-import { createSessionMemo, sessionToken } from "@/lib/auth/session-memo";
+import { createSessionMemo, isSessionCurrent, sessionToken } from "@/lib/auth/session-memo";
 
 // Project rules: Auth.js's cookie names are its documented defaults (authjs.session-token, with
 // __Secure- over HTTPS, split into .0, .1 … chunks when long); the rest is our own behaviour.
@@ -18,19 +18,21 @@ describe("the session cookie", () => {
   });
 });
 
+const claims = { userId: "user-1", sessionVersion: 3 };
+
 describe("who a session cookie belongs to", () => {
   it("asks Auth.js once per cookie while the memory lasts", async () => {
-    const read = vi.fn(async () => "user-1");
+    const read = vi.fn(async () => claims);
     const userIdFor = createSessionMemo(read, 60_000);
-    expect(await userIdFor("cookie-a")).toBe("user-1");
-    expect(await userIdFor("cookie-a")).toBe("user-1");
+    expect(await userIdFor("cookie-a")).toEqual(claims);
+    expect(await userIdFor("cookie-a")).toEqual(claims);
     expect(read).toHaveBeenCalledTimes(1);
     await userIdFor("cookie-b");
     expect(read).toHaveBeenCalledTimes(2);
   });
 
   it("is nobody without a cookie, without asking", async () => {
-    const read = vi.fn(async () => "user-1");
+    const read = vi.fn(async () => claims);
     expect(await createSessionMemo(read)(null)).toBeNull();
     expect(read).not.toHaveBeenCalled();
   });
@@ -44,5 +46,21 @@ describe("who a session cookie belongs to", () => {
     await new Promise((resolve) => setTimeout(resolve, 60));
     await userIdFor("forged");
     expect(read).toHaveBeenCalledTimes(2);
+  });
+});
+
+// Our own rule (the session version, db/queries/sessions.ts): the memo keeps claims, and each
+// request compares them with the person's current version, so an ended session stops at once.
+describe("whether a remembered session still stands", () => {
+  it("stands only with the person's current version", () => {
+    expect(isSessionCurrent(claims, { sessionVersion: 3 })).toBe(true);
+    expect(isSessionCurrent(claims, { sessionVersion: 4 })).toBe(false);
+    expect(isSessionCurrent(claims, null)).toBe(false);
+    expect(isSessionCurrent(null, { sessionVersion: 3 })).toBe(false);
+  });
+
+  it("refuses claims without a whole-number version (a cookie sealed before versions existed)", () => {
+    expect(isSessionCurrent({ userId: "user-1", sessionVersion: Number.NaN }, { sessionVersion: 0 })).toBe(false);
+    expect(isSessionCurrent({ userId: "user-1", sessionVersion: 0.5 }, { sessionVersion: 0.5 })).toBe(false);
   });
 });
