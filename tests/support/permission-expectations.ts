@@ -135,7 +135,8 @@ export const expectations: Record<string, Expectation> = {
   "DELETE /api/finishes/[finishId]": { path: "/api/finishes/demo-finish-saltbush", expect: { ...libraryItemWrite, owner: 409, designer: 409 } },
   "GET /api/finishes/[finishId]/similar": { path: "/api/finishes/demo-finish-saltbush/similar?maxDeltaE=3", expect: libraryItem },
   "GET /api/finishes/export": { path: "/api/finishes/export", expect: libraryList },
-  "POST /api/finishes/import": { path: "/api/finishes/import", expect: libraryWrite },
+  // CSV only: the matrix's empty JSON body is the wrong type (415) for the people allowed to import.
+  "POST /api/finishes/import": { path: "/api/finishes/import", expect: { ...libraryWrite, owner: 415, designer: 415, other: 415 } },
   "POST /api/uploads": { path: "/api/uploads", expect: libraryWrite },
   // Files answer 404 alike for "no such file" and "not yours", so ids can't be probed.
   "GET /api/uploads/[imageId]/[variant]": { path: "/api/uploads/no-such-image/400", expect: as(all(404), { anonymous: 401 }) },
