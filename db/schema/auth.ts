@@ -11,6 +11,8 @@ export const users = sqliteTable("user", {
   emailVerified: integer("emailVerified", { mode: "timestamp_ms" }),
   image: text("image"),
   passwordHash: text("password_hash"),
+  /** The person's own phone number, shown to suppliers as the studio's contact. */
+  phone: text("phone"),
   /** Bumped on sign-out, removal or a change of role: sessions sealed with an older number stop working. */
   sessionVersion: integer("session_version").notNull().default(0),
   createdAt: createdAt(),

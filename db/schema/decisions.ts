@@ -44,6 +44,8 @@ export const options = sqliteTable(
       .references(() => decisions.id, { onDelete: "cascade" }),
     label: text("label").notNull(),
     priceCents: integer("price_cents").notNull(),
+    /** True when a designer typed the price instead of letting it be built from the lines (cost × markup × tax). */
+    priceOverridden: integer("price_overridden", { mode: "boolean" }).notNull().default(false),
     notes: text("notes"),
     boardId: text("board_id").references(() => boards.id, { onDelete: "set null" }),
     sortOrder: integer("sort_order").notNull().default(0),

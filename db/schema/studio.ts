@@ -7,6 +7,10 @@ export const studios = sqliteTable("studio", {
   name: text("name").notNull(),
   /** Studio overrides of the colour-check thresholds, as JSON; absent keys use the defaults. */
   checkSettings: text("check_settings", { mode: "json" }).$type<Record<string, number>>(),
+  /** The studio's markup on cost, in basis points (1500 = 15 %), applied when an option's price is built from its lines. */
+  markupBasisPoints: integer("markup_basis_points").notNull().default(0),
+  /** Sales tax on the client's price, in basis points: GST 10 % = 1000 by default. Prices shown to clients include it. */
+  taxBasisPoints: integer("tax_basis_points").notNull().default(1000),
   createdAt: createdAt(),
 });
 export type Studio = typeof studios.$inferSelect;
