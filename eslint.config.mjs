@@ -14,4 +14,17 @@ export default tseslint.config(
       "@typescript-eslint/no-unused-vars": ["error", { argsIgnorePattern: "^_", varsIgnorePattern: "^_" }],
     },
   },
+  {
+    files: ["app/**/*.{ts,tsx}", "components/**/*.{ts,tsx}"],
+    rules: {
+      "no-restricted-syntax": [
+        "error",
+        {
+          selector: "CallExpression[callee.property.name='bind'][arguments.0.type='Literal'][arguments.0.value=null]",
+          message:
+            "Don't bind server actions: a form posted without JavaScript then hangs React's server renderer. Pass ids as hidden inputs (lib/actions/form-ids.ts).",
+        },
+      ],
+    },
+  },
 );

@@ -51,6 +51,8 @@ try {
   }
 } finally {
   server.kill("SIGTERM");
+  // A server whose main thread is stuck never runs its SIGTERM handler: make sure it goes.
+  setTimeout(() => server.kill("SIGKILL"), 5000).unref();
   await catcher.close();
   rmSync(dir, { recursive: true, force: true });
 }

@@ -3,7 +3,7 @@
 import { useActionState, useState } from "react";
 import { saveFixedItemAction } from "@/app/studio/projects/[projectId]/specification/actions";
 import { FormMessage } from "@/components/auth/form-message";
-import { Button, describeField, Field, Input, LinkButton, Select, Textarea } from "@/components/ui";
+import { Button, describeField, Field, Input, LinkButton, Select, Textarea, useRefusedFocus } from "@/components/ui";
 import { idle } from "@/lib/actions/result";
 
 type Room = { id: string; name: string };
@@ -25,16 +25,24 @@ const hints: Partial<Record<keyof Values, string>> = {
   location: "Where in the room: Island, Tall cabinets, Ceiling.",
 };
 
+const order = ["roomId", "item", "finishId", "location", "quantity", "unit", "notes"] as const satisfies readonly (keyof Values)[];
+
 const categoryNames: Record<string, string> = {
   stone: "Stone and benchtops", cabinetry: "Cabinetry", flooring: "Flooring", tile: "Splashback and tile", tapware: "Tapware and sinks",
   hardware: "Hardware", lighting: "Lighting", appliances: "Appliances", paint: "Paint and walls",
 };
 
-/** Adds or changes a fixed item. Values are kept in state so a refused save keeps what was typed. */
+/**
+ * Adds or changes a fixed item; the ids travel in hidden inputs. Values are kept in state so a
+ * refused save keeps what was typed; without JavaScript the page is drawn again from the values
+ * the action sends back.
+ */
 export function FixedItemForm({ projectId, fixedItemId, rooms, finishes, initial, cancelHref }: Props) {
-  const [state, action, pending] = useActionState(saveFixedItemAction.bind(null, projectId, fixedItemId), idle);
-  const [values, setValues] = useState<Values>({ roomId: "", finishId: "", item: "", location: "", quantity: "", unit: "", notes: "", ...initial });
-  const [unitTouched, setUnitTouched] = useState(Boolean(initial?.unit));
+  const [state, action, pending] = useActionState(saveFixedItemAction, idle);
+  const kept = state.ok ? undefined : state.values;
+  const [values, setValues] = useState<Values>(() => ({ roomId: "", finishId: "", item: "", location: "", quantity: "", unit: "", notes: "", ...initial, ...pick(kept) }));
+  const [unitTouched, setUnitTouched] = useState(Boolean(initial?.unit || kept?.unit));
+  const { formRef, autoFocus } = useRefusedFocus(state, order);
   const errors = state.ok ? undefined : state.fieldErrors;
   const set = (key: keyof Values) => (e: { target: { value: string } }) => setValues((v) => ({ ...v, [key]: e.target.value }));
   const chooseFinish = (e: { target: { value: string } }) => {
@@ -43,9 +51,11 @@ export function FixedItemForm({ projectId, fixedItemId, rooms, finishes, initial
   };
   const categories = [...new Set(finishes.map((f) => f.category))];
   // Each control points at its own hint and error (aria-describedby), as Field lays them out.
-  const wire = (id: string, key: keyof Values) => describeField(id, { hint: hints[key], error: errors?.[key] });
+  const wire = (id: string, key: keyof Values) => ({ ...describeField(id, { hint: hints[key], error: errors?.[key] }), autoFocus: autoFocus(key) });
   return (
-    <form action={action} noValidate className="flex max-w-xl flex-col gap-5">
+    <form ref={formRef} action={action} noValidate className="flex max-w-xl flex-col gap-5">
+      <input type="hidden" name="projectId" value={projectId} />
+      <input type="hidden" name="fixedItemId" value={fixedItemId ?? ""} />
       <Field htmlFor="fixed-room" label="Room" error={errors?.roomId}>
         <Select name="roomId" value={values.roomId} onChange={set("roomId")} {...wire("fixed-room", "roomId")}>
           <option value="" disabled>Choose a room</option>
@@ -90,4 +100,10 @@ export function FixedItemForm({ projectId, fixedItemId, rooms, finishes, initial
       </div>
     </form>
   );
+}
+
+/** The form's own fields out of the values a refused save sent back. */
+function pick(kept: Record<string, string> | undefined): Partial<Values> {
+  if (!kept) return {};
+  return Object.fromEntries(order.filter((key) => key in kept).map((key) => [key, kept[key]]));
 }

@@ -3,7 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { assessPair, underLight } from "@/lib/colour";
 import type { BoardView } from "@/lib/boards/types";
 import { VERDICT_WORDS } from "@/lib/boards/words";
-import { launch, newPage, signInWithLink, signInWithPassword, snap } from "./support/browser";
+import { baseUrl, launch, newPage, signInWithLink, signInWithPassword, snap } from "./support/browser";
 
 // A designer builds a small board of their own (so the demo board stays as seeded), moves a
 // swatch with the keyboard, pairs two swatches and reads the check; the verdict shown is compared
@@ -125,6 +125,7 @@ describe("a designer composes a sample board", () => {
     // Another tab moves the benchtop: the board's version moves on without this page knowing.
     const other = await designer.request.patch(`/api/boards/${boardId}/items/${benchtop?.id}`, {
       data: { version: view.board.version, x: 600, y: 400 },
+      headers: { origin: baseUrl },
     });
     expect(other.status()).toBe(200);
     await designer.locator(`[data-item-id="${base?.id}"]`).focus();
@@ -161,6 +162,7 @@ describe("a client looks at the board on a phone", () => {
     await expect(page.getByRole("button", { name: "Add the pair", exact: true }).count()).resolves.toBe(0);
     const write = await page.request.post("/api/boards/demo-board-kitchen-a/pairs", {
       data: { version: 1, itemAId: "demo-item-tap", itemBId: "demo-item-splash", intent: "match", accessRelevant: false },
+      headers: { origin: baseUrl },
     });
     expect(write.status()).toBe(403);
     const width = await page.evaluate(() => document.documentElement.scrollWidth);

@@ -108,7 +108,7 @@ describe("a client decides on a phone", () => {
 
     // Locked means locked, whatever the screen: the API refuses another pick.
     const id = decisionPath.split("/").pop() ?? "";
-    const refused = await page.request.post(`/api/decisions/${id}/choice`, { data: { optionId: "anything" } });
+    const refused = await page.request.post(`/api/decisions/${id}/choice`, { data: { optionId: "anything" }, headers: { origin: baseUrl } });
     expect(refused.status()).toBe(409);
   }, 180_000);
 

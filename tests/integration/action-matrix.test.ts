@@ -22,26 +22,43 @@ const studioStaff: Record<Persona, Outcome> = { ...anyone, client: 403, client2:
 const projectStaff: Record<Persona, Outcome> = { ...studioStaff, other: 404 };
 const ownersOnly: Record<Persona, Outcome> = { ...studioStaff, designer: 403 };
 
-const EXPECTED: Record<string, { args: unknown[]; expect: Record<Persona, Outcome> }> = {
+const EXPECTED: Record<string, { args: unknown[]; form?: Record<string, string>; expect: Record<Persona, Outcome> }> = {
   "app/(public)/sign-in/actions.ts#requestSignInLink": { args: [], expect: anyone },
   "app/(public)/sign-in/actions.ts#signInWithPassword": { args: [], expect: anyone },
   "app/(public)/sign-up/actions.ts#signUp": { args: [], expect: anyone },
   "lib/actions/sign-out.ts#signOutAction": { args: [], expect: anyone },
   "app/studio/projects/new/actions.ts#createProjectAction": { args: [], expect: studioStaff },
   "app/studio/team/actions.ts#inviteDesignerAction": { args: [], expect: ownersOnly },
-  "app/studio/projects/[projectId]/actions.ts#inviteToProjectAction": { args: [project], expect: projectStaff },
-  "app/studio/projects/[projectId]/boards/actions.ts#createBoardAction": { args: [project], expect: projectStaff },
-  "app/studio/projects/[projectId]/specification/actions.ts#saveFixedItemAction": { args: [project, null], expect: projectStaff },
+  "app/studio/projects/[projectId]/actions.ts#inviteToProjectAction": { args: [], form: { projectId: project }, expect: projectStaff },
+  // Anyone signed in may answer an invitation; an empty form (no invitation) fails validation.
+  "app/welcome/actions.ts#answerInvitationAction": { args: [], expect: { ...anyone, anonymous: 401 } },
+  // These forms post their ids in hidden inputs (see lib/actions/form-ids.ts), so the ids go in the form.
+  "app/studio/projects/[projectId]/boards/actions.ts#createBoardAction": { args: [], form: { projectId: project }, expect: projectStaff },
+  "app/studio/projects/[projectId]/specification/actions.ts#saveFixedItemAction": { args: [], form: { projectId: project }, expect: projectStaff },
   // The owner goes first and really removes the item, so the designer then finds it gone.
-  "app/studio/projects/[projectId]/specification/actions.ts#removeFixedItemAction": { args: [project, "demo-fixed-oven"], expect: { ...projectStaff, designer: 404 } },
-  "app/studio/projects/[projectId]/specification/actions.ts#issueRevisionAction": { args: [project], expect: projectStaff },
+  "app/studio/projects/[projectId]/specification/actions.ts#removeFixedItemAction": {
+    args: [],
+    form: { projectId: project, fixedItemId: "demo-fixed-oven" },
+    expect: { ...projectStaff, designer: 404 },
+  },
+  "app/studio/projects/[projectId]/specification/actions.ts#issueRevisionAction": { args: [], form: { projectId: project }, expect: projectStaff },
+  // The supplier directory: an empty form fails validation; a supplier id is checked as this studio's first.
+  "app/studio/suppliers/actions.ts#saveSupplierAction": { args: [], expect: studioStaff },
+  "app/studio/suppliers/actions.ts#archiveSupplierAction": { args: [], form: { supplierId: "demo-supplier-stone", archived: "0" }, expect: projectStaff },
+  "app/studio/suppliers/actions.ts#deleteSupplierAction": { args: [], form: { supplierId: "demo-supplier-stone" }, expect: projectStaff },
 };
 
 type Action = (...args: unknown[]) => Promise<ActionResult<unknown> | undefined>;
 
-async function outcomeOf(action: Action, args: unknown[]): Promise<Outcome> {
+function formOf(fields: Record<string, string> = {}): FormData {
+  const form = new FormData();
+  for (const [key, value] of Object.entries(fields)) form.set(key, value);
+  return form;
+}
+
+async function outcomeOf(action: Action, args: unknown[], fields?: Record<string, string>): Promise<Outcome> {
   try {
-    const result = await action(...args, idle, new FormData());
+    const result = await action(...args, idle, formOf(fields));
     if (result && !result.ok && (result.status === 401 || result.status === 403 || result.status === 404)) return result.status;
     return "through";
   } catch {
@@ -70,7 +87,7 @@ describe("permission matrix: every server action, as every person", () => {
       const cells: string[] = [];
       for (const person of PEOPLE) {
         actAs(person);
-        const got = await outcomeOf(action, expectation.args);
+        const got = await outcomeOf(action, expectation.args, expectation.form);
         const want = expectation.expect[person];
         cells.push(got === want ? String(got) : `${got}≠${want}`);
         if (got !== want) failures.push(`${key} as ${person}: got ${got}, expected ${want}`);

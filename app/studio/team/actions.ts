@@ -2,7 +2,7 @@
 
 import { revalidatePath } from "next/cache";
 import { addDesigner } from "@/db/queries/studios";
-import { failure, formValues, type ActionResult } from "@/lib/actions/result";
+import { failure, formValues, keptValues, type ActionResult } from "@/lib/actions/result";
 import { requireApiUser } from "@/lib/auth/session";
 import { invitationMessage } from "@/lib/mail/messages";
 import { appUrl, sendMail } from "@/lib/mail/send";
@@ -26,6 +26,6 @@ export async function inviteDesignerAction(_prev: ActionResult, form: FormData):
     revalidatePath("/studio/team");
     return { ok: true, data: undefined };
   } catch (error) {
-    return failure(error);
+    return failure(error, keptValues(form));
   }
 }

@@ -2,7 +2,7 @@
 
 import { redirect } from "next/navigation";
 import { createProject } from "@/db/queries/projects";
-import { failure, formValues, type ActionResult } from "@/lib/actions/result";
+import { failure, formValues, keptValues, type ActionResult } from "@/lib/actions/result";
 import { requireApiUser } from "@/lib/auth/session";
 import { createProjectSchema } from "@/lib/validation/project";
 
@@ -13,7 +13,7 @@ export async function createProjectAction(_prev: ActionResult, form: FormData): 
     const input = createProjectSchema.parse(formValues(form));
     projectId = (await createProject(actor, input)).id;
   } catch (error) {
-    return failure(error);
+    return failure(error, keptValues(form));
   }
   redirect(`/studio/projects/${projectId}`);
 }

@@ -5,7 +5,6 @@ import { NewBoardForm } from "@/components/board/new-board-form";
 import { Card, EmptyState, PageHeader, Section } from "@/components/ui";
 import { requireRole } from "@/lib/auth/session";
 import { pageGuard } from "@/lib/page-guard";
-import { createBoardAction } from "./actions";
 
 export const metadata: Metadata = { title: "Sample boards" };
 
@@ -45,7 +44,7 @@ export default async function BoardsPage({ params }: Props) {
           {list.rooms.length === 0 ? (
             <p className="text-ink-soft">Add a room to the project first.</p>
           ) : (
-            <NewBoardForm rooms={list.rooms.map((r) => ({ id: r.id, name: r.name }))} action={createBoardAction.bind(null, list.project.id)} />
+            <NewBoardForm projectId={list.project.id} rooms={list.rooms.map((r) => ({ id: r.id, name: r.name }))} />
           )}
         </Card>
       </div>

@@ -20,10 +20,10 @@ import { letterForSequence } from "@/lib/spec/letters";
 
 export const metadata: Metadata = { title: "Specification" };
 
-type Props = { params: Promise<{ projectId: string }>; searchParams: Promise<{ view?: string }> };
+type Props = { params: Promise<{ projectId: string }>; searchParams: Promise<{ view?: string; issue?: string }> };
 
 export default async function SpecificationPage({ params, searchParams }: Props) {
-  const [{ projectId }, { view }] = await Promise.all([params, searchParams]);
+  const [{ projectId }, { view, issue }] = await Promise.all([params, searchParams]);
   const actor = await requireRole("designer");
   const [spec, revisions, fixed] = await pageGuard(
     Promise.all([getSpecificationView(actor, projectId), listRevisionsForActor(actor, projectId), listFixedItems(actor, projectId)]),
@@ -58,7 +58,18 @@ export default async function SpecificationPage({ params, searchParams }: Props)
         installDate={spec.project.installDate}
         latest={spec.latest}
         changes={spec.changes}
-        issue={<IssueRevisionForm projectId={spec.project.id} nextLetter={nextLetter} lineCount={spec.lines.length} suppliers={suppliers} disabledReason={disabledReason} />}
+        issue={
+          <IssueRevisionForm
+            projectId={spec.project.id}
+            nextLetter={nextLetter}
+            lineCount={spec.lines.length}
+            suppliers={suppliers}
+            disabledReason={disabledReason}
+            startConfirming={issue === "confirm"}
+            specPath={base}
+            grouping={grouping}
+          />
+        }
       />
       <div className="flex flex-wrap items-center justify-between gap-3">
         <h2 className="sr-only">Schedule</h2>
@@ -76,13 +87,11 @@ export default async function SpecificationPage({ params, searchParams }: Props)
         description="Things the specification carries without a client choice: appliances, downlights, the floor."
         actions={<LinkButton href={`${base}/fixed-items/new`}>Add a fixed item</LinkButton>}
       >
-        {fixed.length ? (
-          <Card>
-            <FixedItemList projectId={spec.project.id} items={fixed} />
-          </Card>
-        ) : (
-          <EmptyState title="No fixed items" level={3}>Add appliances, lighting or anything else that needs no client choice.</EmptyState>
-        )}
+        <FixedItemList
+          projectId={spec.project.id}
+          items={fixed}
+          empty={<EmptyState title="No fixed items" level={3}>Add appliances, lighting or anything else that needs no client choice.</EmptyState>}
+        />
       </Section>
       <Section title="Issued revisions" description="Each revision is frozen when issued; its hash shows it hasn't changed since.">
         {revisions.length ? (
