@@ -3,7 +3,9 @@ import Link from "next/link";
 import { todayUtc } from "@/db/queries/attention";
 import { getProjectBudget } from "@/db/queries/decision-budget";
 import { getClientHome } from "@/db/queries/homes";
+import { listPendingInvitations } from "@/db/queries/invitations";
 import { BudgetSummary } from "@/components/decisions/budget-summary";
+import { PendingInvitations } from "@/components/invitations/pending-invitations";
 import { Badge, Card, EmptyState, Notice, PageHeader } from "@/components/ui";
 import { requireRole } from "@/lib/auth/session";
 import { describeDue, formatDay } from "@/lib/format";
@@ -12,11 +14,12 @@ export const metadata: Metadata = { title: "My project" };
 
 export default async function ClientHome() {
   const actor = await requireRole("client");
-  const { projects, waiting, boards } = await getClientHome(actor);
+  const [{ projects, waiting, boards }, invitations] = await Promise.all([getClientHome(actor), listPendingInvitations(actor)]);
   const budgets = new Map(await Promise.all(projects.map(async (p) => [p.id, await getProjectBudget(p.id)] as const)));
   const today = todayUtc();
   return (
     <div className="space-y-8">
+      <PendingInvitations invitations={invitations} />
       {projects.map((project) => {
         const mine = waiting.filter((d) => d.projectId === project.id);
         const budget = budgets.get(project.id);

@@ -2,6 +2,8 @@ import { and, desc, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { auditLog, users } from "@/db/schema";
 
+import { nameOnProject } from "./people-names";
+
 type Executor = Pick<typeof db, "insert">;
 
 export type AuditInput = {
@@ -28,7 +30,8 @@ export async function listAuditForProject(studioId: string, projectId: string, l
       entityId: auditLog.entityId,
       detail: auditLog.detail,
       createdAt: auditLog.createdAt,
-      actorName: users.name,
+      // A client's or supplier's name as this studio typed it, never as another studio stored it.
+      actorName: nameOnProject(projectId),
       actorEmail: users.email,
     })
     .from(auditLog)

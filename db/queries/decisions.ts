@@ -8,6 +8,7 @@ import { readStudioThresholds } from "@/lib/decisions/thresholds";
 import type { DecisionListItem } from "@/lib/decisions/types";
 import { forbidden, notFound } from "@/lib/http";
 import { loadBudgetDecisions, loadLatestChoices } from "./decision-budget";
+import { nameOnProject } from "./people-names";
 import { getProjectForActor } from "./projects";
 import type { Actor } from "./users";
 
@@ -78,7 +79,7 @@ export async function listDecisionsForProject(actor: Actor, projectId: string) {
       : [],
     loadOrderBy(ids, project.installDate),
     loadBudgetDecisions(project.id),
-    loadApproverNames(ids),
+    loadApproverNames(ids, project.id),
   ]);
   const items: DecisionListItem[] = rows.map(({ decision: d, roomName }) => {
     const currentId = d.status === "locked" ? d.lockedOptionId : d.status === "chosen" ? latest.get(d.id)?.optionId : null;
@@ -101,11 +102,11 @@ export async function listDecisionsForProject(actor: Actor, projectId: string) {
   return { project, role, items, budget: summariseBudget([...budgetRows.values()]) };
 }
 
-async function loadApproverNames(decisionIds: string[]) {
+async function loadApproverNames(decisionIds: string[], projectId: string) {
   const out = new Map<string, string>();
   if (decisionIds.length === 0) return out;
   const rows = await db
-    .select({ decisionId: approvals.decisionId, name: users.name, email: users.email })
+    .select({ decisionId: approvals.decisionId, name: nameOnProject(projectId), email: users.email })
     .from(approvals)
     .innerJoin(users, eq(users.id, approvals.userId))
     .where(inArray(approvals.decisionId, decisionIds))

@@ -1,10 +1,9 @@
 import { and, asc, eq, inArray, isNull, or, sql } from "drizzle-orm";
 import { db } from "@/db";
 import { writeTransaction } from "./serial-write";
-import { projectMembers, projects, rooms, studioMembers, suppliers, users } from "@/db/schema";
+import { projectInvitations, projectMembers, projects, rooms, suppliers, users } from "@/db/schema";
 import { projectRole } from "@/lib/auth/permissions";
-import { conflict, forbidden, HttpError, notFound } from "@/lib/http";
-import type { InviteToProjectInput } from "@/lib/validation/auth";
+import { forbidden, notFound } from "@/lib/http";
 import type { CreateProjectInput } from "@/lib/validation/project";
 import { writeAudit } from "./audit";
 import type { Actor } from "./users";
@@ -53,74 +52,55 @@ export async function listRooms(projectId: string) {
   return db.select().from(rooms).where(eq(rooms.projectId, projectId)).orderBy(asc(rooms.sortOrder), asc(rooms.name));
 }
 
-export async function listProjectPeople(projectId: string) {
-  return db
-    .select({
-      id: projectMembers.id,
-      userId: users.id,
-      name: users.name,
-      email: users.email,
-      role: projectMembers.role,
-      supplierName: suppliers.name,
-    })
-    .from(projectMembers)
-    .innerJoin(users, eq(users.id, projectMembers.userId))
-    .leftJoin(suppliers, eq(suppliers.id, projectMembers.supplierId))
-    .where(eq(projectMembers.projectId, projectId))
-    .orderBy(asc(projectMembers.role), asc(users.name));
-}
-
-/** A designer adds a client or a supplier's contact to a project; they sign in with an e-mailed link. */
-export async function addProjectMember(actor: Actor, projectId: string, input: InviteToProjectInput) {
-  const project = await getProjectForStaff(actor, projectId);
-  if (input.role === "supplier") {
-    const supplier = await db.query.suppliers.findFirst({
-      where: and(eq(suppliers.id, input.supplierId ?? ""), eq(suppliers.studioId, project.studioId)),
-    });
-    if (!supplier) throw new HttpError(400, "Choose one of your studio's suppliers.", { supplierId: ["Choose one of your studio's suppliers."] });
-  }
-  return writeTransaction(async (tx) => {
-    let user = await tx.query.users.findFirst({ where: eq(users.email, input.email) });
-    if (user && (await isStudioStaff(tx, user.id))) {
-      throw conflict("That e-mail address belongs to studio staff; staff see projects through their studio.");
-    }
-    if (!user) [user] = await tx.insert(users).values({ email: input.email, name: input.name }).returning();
-    if (!user) throw new Error("member insert returned nothing");
-    const existing = await tx.query.projectMembers.findFirst({
-      where: and(eq(projectMembers.projectId, projectId), eq(projectMembers.userId, user.id)),
-    });
-    if (existing) throw conflict(`${input.email} is already on this project.`);
-    const [member] = await tx
-      .insert(projectMembers)
-      .values({
-        projectId,
-        userId: user.id,
-        role: input.role,
-        supplierId: input.role === "supplier" ? (input.supplierId ?? null) : null,
-        invitedBy: actor.userId,
+/**
+ * The project's clients and suppliers' contacts as its studio sees them: by the name the studio
+ * typed (never the person's own account name, which another studio may have set). Someone who
+ * hasn't joined yet (a new person who hasn't signed in, or an account holder who hasn't accepted)
+ * is listed the same way either way, so the list doesn't tell whether an address had an account.
+ */
+export async function listProjectPeople(projectId: string): Promise<ProjectPerson[]> {
+  const [members, invitations] = await Promise.all([
+    db
+      .select({
+        id: projectMembers.id,
+        name: projectMembers.displayName,
+        email: users.email,
+        role: projectMembers.role,
+        supplierName: suppliers.name,
+        joined: sql<number>`("user"."emailVerified" is not null or "user"."password_hash" is not null)`,
       })
-      .returning();
-    await writeAudit(
-      {
-        studioId: project.studioId,
-        projectId,
-        actorId: actor.userId,
-        action: `${input.role}.invited`,
-        entityType: "user",
-        entityId: user.id,
-        detail: { email: input.email },
-      },
-      tx,
-    );
-    return { project, user, member };
-  });
+      .from(projectMembers)
+      .innerJoin(users, eq(users.id, projectMembers.userId))
+      .leftJoin(suppliers, eq(suppliers.id, projectMembers.supplierId))
+      .where(eq(projectMembers.projectId, projectId)),
+    db
+      .select({
+        id: projectInvitations.id,
+        name: projectInvitations.name,
+        email: projectInvitations.email,
+        role: projectInvitations.role,
+        supplierName: suppliers.name,
+      })
+      .from(projectInvitations)
+      .leftJoin(suppliers, eq(suppliers.id, projectInvitations.supplierId))
+      .where(eq(projectInvitations.projectId, projectId)),
+  ]);
+  const people: ProjectPerson[] = [
+    ...members.map((m) => ({ ...m, name: m.name ?? m.email, joined: Boolean(m.joined) })),
+    ...invitations.map((i) => ({ ...i, name: i.name ?? i.email, joined: false })),
+  ];
+  return people.sort((a, b) => a.role.localeCompare(b.role) || a.name.localeCompare(b.name));
 }
 
-type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
-
-async function isStudioStaff(tx: Tx, userId: string) {
-  return Boolean(await tx.query.studioMembers.findFirst({ where: eq(studioMembers.userId, userId) }));
-}
+export type ProjectPerson = {
+  id: string;
+  name: string;
+  email: string;
+  role: "client" | "supplier";
+  supplierName: string | null;
+  /** False until they have signed in (or, with an account already, accepted). */
+  joined: boolean;
+};
 
 /** A new project with its rooms, in one transaction. */
 export async function createProject(actor: Actor, input: CreateProjectInput) {

@@ -5,6 +5,7 @@ import { diffLines, linesForSupplier, type SpecDiff } from "@/lib/spec/diff";
 import { shiftDay } from "@/lib/spec/order-by";
 import { isLate, lineStatus, type LineStatus } from "@/lib/spec/status";
 import { todayUtc } from "./attention";
+import { nameOnProject } from "./people-names";
 import { getProjectForStaff } from "./projects";
 import { readRevisionLines, type RevisionLine } from "./spec-revisions";
 import type { Actor } from "./users";
@@ -18,7 +19,7 @@ async function readProjectAcks(projectId: string): Promise<Ack[]> {
       revisionId: supplierAcknowledgements.revisionId,
       supplierId: supplierAcknowledgements.supplierId,
       acknowledgedAt: supplierAcknowledgements.acknowledgedAt,
-      byName: users.name,
+      byName: nameOnProject(projectId),
       byEmail: users.email,
     })
     .from(supplierAcknowledgements)
@@ -30,7 +31,7 @@ async function readProjectAcks(projectId: string): Promise<Ack[]> {
 /** The project's supplier contacts: who gets the e-mail when a revision is issued. */
 export async function readContacts(projectId: string) {
   return db
-    .select({ supplierId: projectMembers.supplierId, email: users.email, name: users.name })
+    .select({ supplierId: projectMembers.supplierId, email: users.email, name: projectMembers.displayName })
     .from(projectMembers)
     .innerJoin(users, eq(users.id, projectMembers.userId))
     .where(and(eq(projectMembers.projectId, projectId), eq(projectMembers.role, "supplier")));

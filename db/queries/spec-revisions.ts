@@ -5,6 +5,7 @@ import { projectRole, supplierIdFor } from "@/lib/auth/permissions";
 import { forbidden, notFound } from "@/lib/http";
 import { pickLineContent } from "@/lib/spec/revision-content";
 import type { SpecLineContent } from "@/lib/spec/types";
+import { nameOnProject } from "./people-names";
 import type { Reader } from "./spec-source";
 import type { Actor } from "./users";
 
@@ -99,11 +100,12 @@ export async function readIssuerName(userId: string): Promise<string> {
 }
 
 export async function readAcknowledgements(revisionId: string, supplierId?: string) {
+  const projectOfRevision = sql`(select r."project_id" from "spec_revision" r where r."id" = ${revisionId})`;
   return db
     .select({
       supplierId: supplierAcknowledgements.supplierId,
       acknowledgedAt: supplierAcknowledgements.acknowledgedAt,
-      byName: users.name,
+      byName: nameOnProject(projectOfRevision),
       byEmail: users.email,
     })
     .from(supplierAcknowledgements)

@@ -1,4 +1,5 @@
 import bcrypt from "bcryptjs";
+import { sql } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import * as t from "@/db/schema";
 import { lightReflectance } from "@/lib/colour/luminance";
@@ -83,4 +84,9 @@ export async function seedDemo(db: Database) {
   await db.insert(t.projectMembers).values({ id: demoId("member", "otherclient"), projectId: demoId("project", "quarry"), userId: user("otherclient"), role: "client" }).onConflictDoNothing();
 
   await seedDemoProject(db, { studio, user, supplierKeys: supplierRows.map((s) => s.key) });
+  // The demo's clients and suppliers have signed in before (they have made choices), and each
+  // studio knows them by the name it typed: here, the name on their account.
+  await db.run(sql`update "project_member" set "display_name" = (select u."name" from "user" u where u."id" = "project_member"."user_id")
+    where "display_name" is null and "id" like 'demo-member-%'`);
+  await db.run(sql`update "user" set "emailVerified" = ${Date.UTC(2026, 0, 5, 9)} where "emailVerified" is null and "password_hash" is null and "id" like 'demo-user-%'`);
 }

@@ -16,6 +16,8 @@ const phrases: Record<string, (d: Detail) => string> = {
   "project.created": () => "created the project",
   "client.invited": (d) => `invited a client${text(d, "email") ? ` (${text(d, "email")})` : ""}`,
   "supplier.invited": (d) => `invited a supplier's contact${text(d, "email") ? ` (${text(d, "email")})` : ""}`,
+  "invitation.accepted": (d) => `accepted the invitation to join as ${text(d, "role") === "supplier" ? "a supplier's contact" : "a client"}`,
+  "invitation.declined": () => "declined the invitation to the project",
   "decision.created": (d) => `opened the decision${quoted(d, "title")}`,
   "decision.updated": (d) => `changed the decision${quoted(d, "title")}`,
   "decision.sent": (d) => `sent the decision${quoted(d, "title")} to the clients`,

@@ -1,5 +1,5 @@
 import "server-only";
-import { listProjectClientRecipients, listStudioStaffRecipients, type Recipient } from "@/db/queries/decision-people";
+import { listProjectClientRecipients, listStudioStaffRecipients, readNameOnProject, type Recipient } from "@/db/queries/decision-people";
 import { clientChoseMessage, decisionWaitingMessage, variationMessage, type EmailContent, type VariationStage } from "@/lib/mail/messages";
 import { afterResponse } from "@/lib/mail/after-response";
 import { appUrl, sendMail } from "@/lib/mail/send";
@@ -10,40 +10,68 @@ type ProjectRef = { id: string; name: string; studioId: string };
 export const studioDecisionPath = (projectId: string, decisionId: string) => `/studio/projects/${projectId}/decisions/${decisionId}`;
 export const clientDecisionPath = (decisionId: string) => `/client/decisions/${decisionId}`;
 
-/**
- * The change is already committed when these run, so a mail server that is down must not turn a
- * saved approval into an error: the mail goes out after the answer, failures are logged, and the
- * person's screen still tells the truth.
- */
-async function deliver(recipients: Recipient[], build: (r: Recipient) => EmailContent) {
-  await afterResponse(async () => {
-    for (const r of recipients) {
+/** Who got the e-mail and who didn't (the mail server refused or was down; logged). */
+export type Delivery = { delivered: string[]; failed: string[] };
+
+/** Sends to each recipient now and reports what happened; one failure doesn't stop the rest. */
+async function deliverNow(recipients: Recipient[], build: (r: Recipient) => EmailContent): Promise<Delivery> {
+  const results = await Promise.all(
+    recipients.map(async (r) => {
       try {
         await sendMail({ to: r.email, ...build(r) });
+        return { email: r.email, ok: true };
       } catch (error) {
         console.error(`could not e-mail ${r.email}:`, error);
+        return { email: r.email, ok: false };
       }
-    }
+    }),
+  );
+  return { delivered: results.filter((r) => r.ok).map((r) => r.email), failed: results.filter((r) => !r.ok).map((r) => r.email) };
+}
+
+/**
+ * Notices that follow a change already committed go out after the answer (nobody waits on the
+ * mail server to see their choice saved); failures are logged, and the screen only ever says the
+ * change was saved, never that an e-mail went.
+ */
+async function deliverLater(recipients: () => Promise<Recipient[]>, build: (r: Recipient) => EmailContent) {
+  await afterResponse(async () => {
+    await deliverNow(await recipients(), build);
   });
 }
 
-/** "A decision is waiting for you", to each of the project's clients. */
-export async function notifyDecisionWaiting(project: ProjectRef, decision: DecisionRef) {
+const waitingMessage = (project: ProjectRef, decision: DecisionRef) => {
   const url = appUrl(clientDecisionPath(decision.id));
-  await deliver(await listProjectClientRecipients(project.id), () =>
-    decisionWaitingMessage({ url, projectName: project.name, decisionTitle: decision.title, dueDate: decision.dueDate }),
-  );
+  return () => decisionWaitingMessage({ url, projectName: project.name, decisionTitle: decision.title, dueDate: decision.dueDate });
+};
+
+/**
+ * "Send to client": "a decision is waiting for you" to each of the project's clients. Sending *is*
+ * what the designer asked for, so this waits for the mail server and says who was reached.
+ */
+export async function sendDecisionWaiting(project: ProjectRef, decision: DecisionRef): Promise<Delivery> {
+  return deliverNow(await listProjectClientRecipients(project.id), waitingMessage(project, decision));
 }
 
-/** The client chose or approved: to the project's designers. */
+/** The same notice as a by-product of opening a decision: after the answer, like the others. */
+export async function notifyDecisionWaiting(project: ProjectRef, decision: DecisionRef) {
+  await deliverLater(() => listProjectClientRecipients(project.id), waitingMessage(project, decision));
+}
+
+/** The client chose or approved: to the project's designers, naming the client as this studio named them. */
 export async function notifyClientChose(
   project: ProjectRef,
   decision: DecisionRef,
-  input: { clientName: string; optionLabel: string; approved: boolean },
+  input: { clientId: string; optionLabel: string; approved: boolean },
 ) {
   const url = appUrl(studioDecisionPath(project.id, decision.id));
-  await deliver(await listStudioStaffRecipients(project.studioId), () =>
-    clientChoseMessage({ url, projectName: project.name, decisionTitle: decision.title, ...input }),
+  let clientName = "";
+  await deliverLater(
+    async () => {
+      clientName = await readNameOnProject(project.id, input.clientId);
+      return listStudioStaffRecipients(project.studioId);
+    },
+    () => clientChoseMessage({ url, projectName: project.name, decisionTitle: decision.title, clientName, optionLabel: input.optionLabel, approved: input.approved }),
   );
 }
 
@@ -63,6 +91,6 @@ export async function notifyVariation(
       ? `${studioDecisionPath(project.id, decision.id)}/variations/${variationId}`
       : `${clientDecisionPath(decision.id)}/variations/${variationId}`;
   const url = appUrl(path);
-  const recipients = audience === "staff" ? await listStudioStaffRecipients(project.studioId) : await listProjectClientRecipients(project.id);
-  await deliver(recipients, () => variationMessage({ url, projectName: project.name, decisionTitle: decision.title, stage }));
+  const recipients = () => (audience === "staff" ? listStudioStaffRecipients(project.studioId) : listProjectClientRecipients(project.id));
+  await deliverLater(recipients, () => variationMessage({ url, projectName: project.name, decisionTitle: decision.title, stage }));
 }

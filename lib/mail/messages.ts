@@ -45,6 +45,29 @@ export function invitationMessage(input: {
   });
 }
 
+/**
+ * To someone who already has an account: a studio asks them onto a project, and nothing happens
+ * until they sign in and accept. Says nothing about their other projects or studios.
+ */
+export function projectInvitationMessage(input: {
+  url: string;
+  studioName: string;
+  inviterName: string;
+  role: "client" | "supplier";
+  projectName: string;
+}): EmailContent {
+  return renderEmail({
+    subject: `${toOneLine(input.studioName)} invited you to ${toOneLine(input.projectName)} on Mottle`,
+    heading: `You’re invited to ${input.projectName}`,
+    paragraphs: [
+      `${input.inviterName} at ${input.studioName} has invited you as a ${input.role} ${INVITATION_PURPOSE[input.role](input.projectName)}.`,
+      "Sign in to Mottle with this e-mail address to accept or decline. You won’t be added until you accept.",
+    ],
+    action: { label: "Sign in to answer", url: input.url },
+    footnote: "If you weren’t expecting this invitation, you can ignore this e-mail or decline it after signing in.",
+  });
+}
+
 export function decisionWaitingMessage(input: {
   url: string;
   projectName: string;

@@ -9,8 +9,8 @@ import { POST as price } from "@/app/api/decisions/[decisionId]/variations/[vari
 import { POST as withdraw } from "@/app/api/decisions/[decisionId]/variations/[variationId]/withdraw/route";
 import { POST as requestVariation } from "@/app/api/decisions/[decisionId]/variations/route";
 import { GET as listDecisions, POST as createDecision } from "@/app/api/projects/[projectId]/decisions/route";
-import { addProjectMember } from "@/db/queries/projects";
-import { getActor } from "@/db/queries/users";
+import { inviteToProject } from "@/db/queries/project-invite";
+import { getActor, getUserByEmail } from "@/db/queries/users";
 import { actAsUser, call, demo, newDecisionBody, type Reply } from "@/tests/support/decision-calls";
 import { actAs, demoUserId, type Persona } from "@/tests/support/session";
 
@@ -52,8 +52,8 @@ beforeAll(async () => {
   // A client of another studio's project: must never see this project's decisions.
   const other = await getActor(demoUserId("other"));
   if (!other) throw new Error("no other designer");
-  const { user } = await addProjectMember(other, demo.otherProject, { email: "quarry.client@example.com", name: "Quarry Client", role: "client" });
-  outsiderClient = user.id;
+  await inviteToProject(other, demo.otherProject, { email: "quarry.client@example.com", name: "Quarry Client", role: "client" });
+  outsiderClient = (await getUserByEmail("quarry.client@example.com"))?.id ?? "";
 });
 
 describe("reading decisions", () => {

@@ -3,6 +3,7 @@ import {
   clientChoseMessage,
   decisionWaitingMessage,
   invitationMessage,
+  projectInvitationMessage,
   revisionIssuedMessage,
   signInLinkMessage,
   supplierAcknowledgedMessage,
@@ -43,6 +44,7 @@ describe("message builders", () => {
     const messages = [
       invitationMessage({ url: URL_WITH_QUERY, studioName: EVIL, inviterName: EVIL, role: "client" }),
       invitationMessage({ ...common, studioName: "North Studio", inviterName: EVIL, role: "supplier" }),
+      projectInvitationMessage({ ...common, studioName: EVIL, inviterName: EVIL, role: "client" }),
       decisionWaitingMessage({ ...common, decisionTitle: EVIL, dueDate: "2026-12-18T23:30:00Z" }),
       clientChoseMessage({ ...common, decisionTitle: EVIL, clientName: EVIL, optionLabel: EVIL, approved: true }),
       revisionIssuedMessage({ ...common, letter: "C", supplierName: EVIL, lineCount: 1 }),
@@ -50,6 +52,13 @@ describe("message builders", () => {
       variationMessage({ ...common, decisionTitle: EVIL, stage: "priced" }),
     ];
     messages.forEach(expectSafe);
+  });
+
+  it("asks someone with an account to sign in and accept, promising nothing happens before (project rule)", () => {
+    const message = projectInvitationMessage({ url: URL_WITH_QUERY, studioName: "Fernleaf Interiors", inviterName: "Rafe", role: "supplier", projectName: "Marrow Street terrace" });
+    expect(message.subject).toBe("Fernleaf Interiors invited you to Marrow Street terrace on Mottle");
+    expect(message.text).toContain("Sign in to Mottle with this e-mail address to accept or decline");
+    expect(message.text).toContain("You won’t be added until you accept.");
   });
 
   it("shows due dates in UTC like Fri 18 Dec 2026", () => {

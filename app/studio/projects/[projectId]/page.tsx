@@ -49,15 +49,18 @@ export default async function ProjectPage({ params }: Props) {
               {people.map((p) => (
                 <li key={p.id} className="flex flex-wrap items-center justify-between gap-2 py-3">
                   <span>
-                    {p.name ?? p.email} <span className="text-ink-soft">· {p.email}</span>
+                    {p.name} {p.name !== p.email ? <span className="text-ink-soft">· {p.email}</span> : null}
                   </span>
-                  <Badge tone="neutral">{p.role === "supplier" ? `Supplier · ${p.supplierName ?? ""}` : "Client"}</Badge>
+                  <span className="flex flex-wrap gap-2">
+                    <Badge tone="neutral">{p.role === "supplier" ? `Supplier · ${p.supplierName ?? ""}` : "Client"}</Badge>
+                    {p.joined ? null : <Badge tone="info">Invited, not joined yet</Badge>}
+                  </span>
                 </li>
               ))}
             </ul>
           )}
           <div className="mt-6 border-t border-line pt-6">
-            <InviteToProjectForm projectId={project.id} suppliers={suppliers.map((s) => ({ id: s.id, name: s.name, trade: s.trade }))} />
+            <InviteToProjectForm projectId={project.id} suppliers={suppliers.filter((s) => !s.archivedAt).map((s) => ({ id: s.id, name: s.name, trade: s.trade }))} />
           </div>
         </Card>
       </div>

@@ -19,7 +19,7 @@ export const POST = route(async (request, { params }: Context) => {
   await notifyClientChose(
     project,
     decision,
-    { clientName: actor.name ?? actor.email, optionLabel: option.label, approved: true },
+    { clientId: actor.userId, optionLabel: option.label, approved: true },
   );
   return NextResponse.json(await getDecisionView(actor, decisionId));
 });

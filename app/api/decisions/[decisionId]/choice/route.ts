@@ -20,7 +20,7 @@ export const POST = route(async (request, { params }: Context) => {
     await notifyClientChose(
       project,
       decision,
-      { clientName: actor.name ?? actor.email, optionLabel: option.label, approved: false },
+      { clientId: actor.userId, optionLabel: option.label, approved: false },
     );
   }
   // The decision as this write left it: no need to look up who may see it a third time.
