@@ -63,18 +63,23 @@ afterAll(async () => {
 });
 
 describe("sign-in links and every e-mailed link use the configured origin", () => {
-  it("Auth.js's own link endpoint, posted with a forged Host, X-Forwarded-Host and Origin, still links to us", async () => {
-    const since = Date.now() - 1000;
+  it("Auth.js's own link endpoint refuses a forged Origin, and with a forged Host and X-Forwarded-Host still links to us", async () => {
     const csrf = await raw("GET", "/api/auth/csrf", { host: EVIL, "x-forwarded-host": EVIL, "x-forwarded-proto": "https" });
     expect(csrf.status).toBe(200);
     const { csrfToken } = JSON.parse(csrf.text) as { csrfToken: string };
     const form = new URLSearchParams({ email: "stone@demo.example", csrfToken, callbackUrl: "/supplier" }).toString();
-    const res = await raw("POST", "/api/auth/signin/nodemailer", { ...FORGED, cookie: cookiesOf(csrf), "content-type": "application/x-www-form-urlencoded" }, form);
+    const headers = { cookie: cookiesOf(csrf), "content-type": "application/x-www-form-urlencoded" };
+    // The whole forgery, Origin included: refused before Auth.js sees it.
+    const forged = await raw("POST", "/api/auth/signin/nodemailer", { ...FORGED, ...headers }, form);
+    expect(forged.status).toBe(403);
+    // Our Origin, but Host and X-Forwarded-* pointing elsewhere: the e-mailed link is still ours.
+    const since = Date.now() - 1000;
+    const res = await raw("POST", "/api/auth/signin/nodemailer", { ...FORGED, origin: ours.origin, ...headers }, form);
     expect(res.status).toBeLessThan(500);
+    for (const location of [res.headers.location].flat()) if (location) expect(location).not.toContain(EVIL);
     const link = await waitForMailLink("stone@demo.example", since, (l) => l.includes("/api/auth/callback/nodemailer"));
     expect(new URL(link).host).not.toBe(EVIL);
     expect(onOurOrigin(link)).toBe(true);
-    for (const location of [res.headers.location].flat()) if (location) expect(location).not.toContain(EVIL);
   });
 
   it("the sign-in page's link form, sent by a browser with X-Forwarded-Host, still links to us", async () => {

@@ -24,7 +24,8 @@ async function startServer(port: number) {
   const [command, args] = serveCommand(port);
   const child = spawn(command, args, {
     stdio: ["ignore", "ignore", "inherit"],
-    env: { ...process.env, NODE_ENV: "production", DATABASE_URL: databaseUrl, UPLOADS_DIR: path.join(dir, "uploads"), SMTP_URL: "smtp://127.0.0.1:9" },
+    // Its own public origin: the e2e run's APP_URL belongs to the other server.
+    env: { ...process.env, NODE_ENV: "production", APP_URL: `http://127.0.0.1:${port}`, PORT: String(port), DATABASE_URL: databaseUrl, UPLOADS_DIR: path.join(dir, "uploads"), SMTP_URL: "smtp://127.0.0.1:9" },
   });
   await waitForHttp(`http://127.0.0.1:${port}/api/health`, 60_000, child);
   return child;
