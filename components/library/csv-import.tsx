@@ -4,9 +4,10 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
 import { useState } from "react";
 import { Button, describeField, Field, Input, Notice, Table, TBody, Td, Th, THead, Tr } from "@/components/ui";
+import { MissingSuppliers } from "@/components/suppliers/missing-suppliers";
 import { ApiError, libraryKeys, requestJson } from "./library-api";
 
-type Report = { dryRun: boolean; total: number; valid: number; imported: number; rejected: { line: number; name: string; errors: string[] }[] };
+type Report = { dryRun: boolean; total: number; valid: number; imported: number; rejected: { line: number; name: string; errors: string[] }[]; missingSuppliers?: string[] };
 
 async function send(file: File, dryRun: boolean): Promise<Report> {
   const form = new FormData();
@@ -72,6 +73,15 @@ export function CsvImport() {
         {report && report.total === 0 && <p className="text-ink-soft">The file has a header but no rows.</p>}
         {report && report.rejected.length > 0 && (
           <>
+            {file && report.missingSuppliers && report.missingSuppliers.length > 0 && (
+              <MissingSuppliers
+                names={report.missingSuppliers}
+                onAdded={() => {
+                  run.reset();
+                  check.mutate(file);
+                }}
+              />
+            )}
             <Notice tone="caution" title={`${report.rejected.length} of ${report.total} rows need fixing`}>
               An import with any bad row imports nothing. Fix these rows in the spreadsheet and check it again.
             </Notice>

@@ -43,7 +43,8 @@ export async function exportFinishesCsv(actor: Actor): Promise<string> {
 }
 
 export type RejectedRow = { line: number; name: string; errors: string[] };
-export type ImportReport = { dryRun: boolean; total: number; valid: number; imported: number; rejected: RejectedRow[] };
+/** `missingSuppliers`: supplier names the file uses that the studio doesn't have yet (the import screen offers to add them). */
+export type ImportReport = { dryRun: boolean; total: number; valid: number; imported: number; rejected: RejectedRow[]; missingSuppliers: string[] };
 
 type Parsed = { header: (CsvColumn | null)[]; rows: { line: number; cells: string[] }[] };
 
@@ -67,7 +68,7 @@ function parseCsv(text: string): Parsed {
 type Checked = { line: number; input: FinishInput; supplierId: string | null };
 
 /** Every row checked against the schema, the studio's suppliers and what is already in the library. */
-async function checkRows(studioId: string, parsed: Parsed): Promise<{ good: Checked[]; rejected: RejectedRow[] }> {
+async function checkRows(studioId: string, parsed: Parsed): Promise<{ good: Checked[]; rejected: RejectedRow[]; missing: string[] }> {
   const studioSuppliers = await db.select().from(suppliers).where(eq(suppliers.studioId, studioId));
   const supplierByName = new Map(studioSuppliers.map((s) => [s.name.trim().toLowerCase(), s]));
   const existing = await db
@@ -78,6 +79,7 @@ async function checkRows(studioId: string, parsed: Parsed): Promise<{ good: Chec
   const seen = new Map(existing.map((e) => [codeKey(e.supplierId, e.code ?? ""), 0]));
   const good: Checked[] = [];
   const rejected: RejectedRow[] = [];
+  const missing = new Map<string, string>();
   for (const { line, cells } of parsed.rows) {
     const named: Partial<Record<CsvColumn, string>> = {};
     parsed.header.forEach((column, i) => {
@@ -87,7 +89,11 @@ async function checkRows(studioId: string, parsed: Parsed): Promise<{ good: Chec
     const errors = result.ok ? [] : [...result.errors];
     const supplierName = (named.supplier ?? "").trim();
     const supplier = supplierName ? supplierByName.get(supplierName.toLowerCase()) : undefined;
-    if (supplierName && !supplier) errors.push(`supplier: there is no supplier called "${supplierName}" in your studio. Add it first, or leave the cell blank.`);
+    if (supplierName && !supplier) {
+      errors.push(`supplier: there is no supplier called "${supplierName}" in your studio. Add it first, or leave the cell blank.`);
+      if (!missing.has(supplierName.toLowerCase())) missing.set(supplierName.toLowerCase(), supplierName);
+    }
+    if (supplier?.archivedAt) errors.push(`supplier: ${supplier.name} is archived. Bring it back under Suppliers first, or leave the cell blank.`);
     const code = result.ok ? result.input.productCode : null;
     if (code && errors.length === 0) {
       const key = codeKey(supplier?.id ?? null, code);
@@ -99,7 +105,7 @@ async function checkRows(studioId: string, parsed: Parsed): Promise<{ good: Chec
     if (errors.length || !result.ok) rejected.push({ line, name: (named.name ?? "").trim(), errors });
     else good.push({ line, input: result.input, supplierId: supplier?.id ?? null });
   }
-  return { good, rejected };
+  return { good, rejected, missing: [...missing.values()] };
 }
 
 /**
@@ -109,8 +115,8 @@ async function checkRows(studioId: string, parsed: Parsed): Promise<{ good: Chec
 export async function importFinishesCsv(actor: Actor, text: string, dryRun: boolean): Promise<ImportReport> {
   const studioId = requireStudioId(actor);
   const parsed = parseCsv(text);
-  const { good, rejected } = await checkRows(studioId, parsed);
-  const report = { dryRun, total: parsed.rows.length, valid: good.length, imported: 0, rejected };
+  const { good, rejected, missing } = await checkRows(studioId, parsed);
+  const report = { dryRun, total: parsed.rows.length, valid: good.length, imported: 0, rejected, missingSuppliers: missing };
   if (dryRun || rejected.length > 0 || good.length === 0) return report;
   const values = good.map(({ input, supplierId }) => {
     const settled = settleColour(input.colour, input.lrv ?? null);

@@ -1,10 +1,10 @@
 import { dehydrate, HydrationBoundary, QueryClient } from "@tanstack/react-query";
 import type { Metadata } from "next";
 import { listFinishes } from "@/db/queries/finish-list";
-import { listSuppliers } from "@/db/queries/studios";
+import { listActiveSuppliers } from "@/db/queries/suppliers";
 import { FinishTable } from "@/components/library/finish-table";
 import { libraryKeys } from "@/components/library/library-api";
-import { LinkButton, PageHeader } from "@/components/ui";
+import { EmptyState, LinkButton, PageHeader } from "@/components/ui";
 import { requireRole } from "@/lib/auth/session";
 import { finishListQuerySchema } from "@/lib/validation/finish";
 
@@ -21,9 +21,12 @@ export default async function LibraryPage({ searchParams }: Props) {
   const query = parsed.success ? parsed.data : finishListQuerySchema.parse({});
   const queryClient = new QueryClient();
   const [suppliers] = await Promise.all([
-    listSuppliers(studioId),
+    listActiveSuppliers(studioId),
     queryClient.prefetchQuery({ queryKey: libraryKeys.page(query), queryFn: () => listFinishes(studioId, query) }),
   ]);
+  // Unfiltered and nothing found: a new studio's library, which says how to start rather than "no match".
+  const firstPage = queryClient.getQueryData<{ total: number }>(libraryKeys.page(query));
+  const isNewLibrary = Object.keys(raw).length === 0 && firstPage?.total === 0;
   return (
     <div className="space-y-6">
       <PageHeader
@@ -39,9 +42,31 @@ export default async function LibraryPage({ searchParams }: Props) {
           </>
         }
       />
-      <HydrationBoundary state={dehydrate(queryClient)}>
-        <FinishTable initialQuery={query} suppliers={suppliers.map((s) => ({ id: s.id, name: s.name }))} />
-      </HydrationBoundary>
+      {isNewLibrary ? (
+        <EmptyState
+          title="Add finishes to your library"
+          action={
+            <>
+              <LinkButton href="/studio/library/new">Add a finish</LinkButton>
+              <LinkButton href="/studio/library/import" variant="secondary">
+                Import a CSV
+              </LinkButton>
+              {suppliers.length === 0 && (
+                <LinkButton href="/studio/suppliers" variant="secondary">
+                  Add the suppliers and trades you order from
+                </LinkButton>
+              )}
+            </>
+          }
+        >
+          Every board, decision and specification draws on the finishes here: the stone, cabinetry, tile and fittings you specify, with their
+          supplier, price and lead time.
+        </EmptyState>
+      ) : (
+        <HydrationBoundary state={dehydrate(queryClient)}>
+          <FinishTable initialQuery={query} suppliers={suppliers.map((s) => ({ id: s.id, name: s.name }))} />
+        </HydrationBoundary>
+      )}
     </div>
   );
 }

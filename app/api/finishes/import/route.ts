@@ -10,7 +10,10 @@ const csvTooLarge = () => new HttpError(413, "That file is larger than 5 MB. Spl
 
 /** The CSV as multipart (field `file`) or as a text/csv body; the body is read no further than the limit. */
 async function readCsvText(request: Request): Promise<string> {
-  const type = (request.headers.get("content-type") ?? "").toLowerCase();
+  // Parameter values such as the multipart boundary are case-sensitive (RFC 2045 §5.1): compare a
+  // lower-cased copy, but parse with the header as sent (browsers send mixed-case boundaries).
+  const declared = request.headers.get("content-type") ?? "";
+  const type = declared.toLowerCase();
   const multipart = type.startsWith("multipart/form-data");
   if (!multipart && !type.startsWith("text/csv") && !type.startsWith("text/plain")) {
     throw new HttpError(415, "Send the CSV as a file (multipart/form-data) or as text/csv.");
@@ -19,7 +22,7 @@ async function readCsvText(request: Request): Promise<string> {
   const body = await readBodyWithin(request, MAX_CSV_BYTES + 64 * 1024, csvTooLarge);
   let text: string;
   if (multipart) {
-    const file = (await new Response(body, { headers: { "content-type": type } }).formData().catch(() => null))?.get("file");
+    const file = (await new Response(body, { headers: { "content-type": declared } }).formData().catch(() => null))?.get("file");
     if (!file || typeof file === "string") throw new HttpError(400, "Choose a CSV file to import.", { file: ["Choose a CSV file to import."] });
     text = await file.text();
   } else {

@@ -2,7 +2,7 @@ import { dehydrate, HydrationBoundary, QueryClient } from "@tanstack/react-query
 import type { Metadata } from "next";
 import { listSimilarFinishes } from "@/db/queries/finish-similar";
 import { describeRemovalBlock, getFinish } from "@/db/queries/finishes";
-import { listSuppliers } from "@/db/queries/studios";
+import { listActiveSuppliers } from "@/db/queries/suppliers";
 import { draftFromFinish } from "@/components/library/finish-draft";
 import { FinishForm } from "@/components/library/finish-form";
 import { FinishRemoval } from "@/components/library/finish-removal";
@@ -24,13 +24,18 @@ export default async function FinishPage({ params, searchParams }: Props) {
   const finish = await pageGuard(getFinish(actor, finishId));
   const queryClient = new QueryClient();
   const [suppliers] = await Promise.all([
-    listSuppliers(actor.studio?.id ?? ""),
+    listActiveSuppliers(actor.studio?.id ?? ""),
     queryClient.prefetchQuery({
       queryKey: libraryKeys.similar(finish.id, 3),
       queryFn: async () => ({ maxDeltaE: 3, items: await listSimilarFinishes(actor, finish.id, 3, 24) }),
     }),
   ]);
   const { added } = await searchParams;
+  // An archived supplier is offered nowhere new, but a finish that already names it keeps it.
+  const supplierOptions = suppliers.map((s) => ({ id: s.id, name: s.name }));
+  if (finish.supplierId && finish.supplierName && !supplierOptions.some((s) => s.id === finish.supplierId)) {
+    supplierOptions.push({ id: finish.supplierId, name: `${finish.supplierName} (archived)` });
+  }
   return (
     <div className="space-y-6">
       <PageHeader
@@ -50,7 +55,7 @@ export default async function FinishPage({ params, searchParams }: Props) {
         </Notice>
       )}
       <div className="grid items-start gap-8 lg:grid-cols-[minmax(0,1fr)_300px]">
-        <FinishForm key={finish.id} finishId={finish.id} initial={draftFromFinish(finish)} suppliers={suppliers.map((s) => ({ id: s.id, name: s.name }))} />
+        <FinishForm key={finish.id} finishId={finish.id} initial={draftFromFinish(finish)} suppliers={supplierOptions} />
         <aside className="flex flex-col gap-6" aria-label="About this finish">
           <HydrationBoundary state={dehydrate(queryClient)}>
             <SimilarFinishes key={finish.id} finishId={finish.id} leadTimeDays={finish.leadTimeDays} />

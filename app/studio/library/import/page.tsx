@@ -11,7 +11,7 @@ export const metadata: Metadata = { title: "Import or export the library" };
 const columnNotes: Record<(typeof csvColumns)[number], string> = {
   name: "Required.",
   category: `Required: ${finishCategoryKeys.join(", ")} (or the category's name as the library shows it).`,
-  supplier: "One of your studio's suppliers, by name; blank for none.",
+  supplier: "One of your studio's suppliers, by name; blank for none. A name you don't have yet can be added here after checking the file.",
   product_code: "The maker's code. A code already in the library from the same supplier is refused.",
   finish: "Polished, honed, matt…",
   format: "Size or format.",

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { listSuppliers } from "@/db/queries/studios";
+import { listActiveSuppliers } from "@/db/queries/suppliers";
 import { emptyDraft } from "@/components/library/finish-draft";
 import { FinishForm } from "@/components/library/finish-form";
 import { PageHeader } from "@/components/ui";
@@ -9,7 +9,7 @@ export const metadata: Metadata = { title: "Add a finish" };
 
 export default async function NewFinishPage() {
   const actor = await requireRole("designer");
-  const suppliers = await listSuppliers(actor.studio?.id ?? "");
+  const suppliers = await listActiveSuppliers(actor.studio?.id ?? "");
   return (
     <div className="space-y-6">
       <PageHeader
