@@ -10,7 +10,9 @@ export default async function StudioLayout({ children }: { children: ReactNode }
       nav={[
         { href: "/studio", label: "Projects" },
         { href: "/studio/library", label: "Library" },
+        { href: "/studio/suppliers", label: "Suppliers" },
         { href: "/studio/team", label: "Team" },
+        { href: "/studio/settings", label: "Settings" },
       ]}
     >
       {children}

@@ -9,6 +9,7 @@ import type { DecisionView, OptionView } from "@/lib/decisions/types";
 import { AllowanceDifference } from "./allowance-difference";
 import { decisionApi, decisionKey, DecisionRequestError, postJson } from "./decision-fetch";
 import { OptionChecksList } from "./option-checks-list";
+import { PriceWithTax } from "./price-build";
 
 /**
  * The explicit confirmation: it restates the option, its finishes, the price and its difference
@@ -59,7 +60,7 @@ export function ApproveConfirm({ view, option }: { view: DecisionView; option: O
         <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1">
           <dt className="text-ink-soft">Price</dt>
           <dd className="font-semibold">
-            <Money cents={option.priceCents} />
+            <PriceWithTax cents={option.priceCents} taxBasisPoints={view.taxBasisPoints} />
           </dd>
           <dt className="text-ink-soft">Allowance</dt>
           <dd>

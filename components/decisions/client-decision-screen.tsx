@@ -66,13 +66,13 @@ export function ClientDecisionScreen({ initial, justLocked, today }: Props) {
 
       {locked && carried ? (
         <div className="space-y-4">
-          <OptionCard option={carried} marker="Approved" emphasised />
+          <OptionCard option={carried} taxBasisPoints={view.taxBasisPoints} marker="Approved" emphasised />
           {offered.length > 1 && (
             <details className="rounded-lg border border-line bg-card p-4">
               <summary className="min-h-tap cursor-pointer content-center font-medium">The other options you compared</summary>
               <div className="mt-4 grid gap-4 md:grid-cols-2">
                 {offered.filter((o) => o.id !== carried.id).map((o) => (
-                  <OptionCard key={o.id} option={o} headingLevel={3} />
+                  <OptionCard key={o.id} option={o} taxBasisPoints={view.taxBasisPoints} headingLevel={3} />
                 ))}
               </div>
             </details>
@@ -80,12 +80,12 @@ export function ClientDecisionScreen({ initial, justLocked, today }: Props) {
         </div>
       ) : (
         <>
-          <OptionsAtAGlance options={offered} pickedId={current?.optionId ?? null} />
+          <OptionsAtAGlance options={offered} pickedId={current?.optionId ?? null} taxBasisPoints={view.taxBasisPoints} />
           <div className={cx("grid gap-4 md:grid-cols-2", offered.length > 2 && "xl:grid-cols-3", offered.length > 3 && "2xl:grid-cols-4")}>
             {offered.map((o) => {
               const isPick = current?.optionId === o.id;
               return (
-                <OptionCard key={o.id} option={o} emphasised={isPick} marker={isPick ? `Current pick${current && current.by.id !== view.viewer.id ? ` (${current.by.name})` : ""}` : undefined}>
+                <OptionCard key={o.id} option={o} taxBasisPoints={view.taxBasisPoints} emphasised={isPick} marker={isPick ? `Current pick${current && current.by.id !== view.viewer.id ? ` (${current.by.name})` : ""}` : undefined}>
                   {isPick ? (
                     <LinkButton href={`/client/decisions/${view.id}/approve/${o.id}`} size="lg">
                       Approve this option…

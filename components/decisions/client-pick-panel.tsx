@@ -4,6 +4,7 @@ import { useState } from "react";
 import { Button, Field, LinkButton, Money, Textarea } from "@/components/ui";
 import type { DecisionView } from "@/lib/decisions/types";
 import { AllowanceDifference } from "./allowance-difference";
+import { PriceWithTax } from "./price-build";
 
 type Props = { view: DecisionView; pending: boolean; onNote: (comment: string) => void };
 
@@ -30,7 +31,7 @@ export function ClientPickPanel({ view, pending, onNote }: Props) {
         <p className="text-ink-soft">{who} picked</p>
         <p className="font-display text-xl font-semibold">{option.label}</p>
         <p>
-          <Money cents={option.priceCents} /> · <AllowanceDifference comparison={option.comparison} /> of <Money cents={view.allowanceCents} />
+          <PriceWithTax cents={option.priceCents} taxBasisPoints={view.taxBasisPoints} /> · <AllowanceDifference comparison={option.comparison} /> of <Money cents={view.allowanceCents} />
         </p>
       </div>
       <LinkButton href={`/client/decisions/${view.id}/approve/${option.id}`} size="lg" className="w-full sm:w-auto">

@@ -8,6 +8,7 @@ import { formatDay } from "@/lib/format";
 import { isDueAfterOrderBy, suggestOrderBy } from "@/lib/decisions/order-by";
 import type { DecisionView, PickerFinish } from "@/lib/decisions/types";
 import type { FieldErrors } from "@/lib/http";
+import type { StudioRates } from "@/lib/pricing/option-price";
 import { emptyOption, draftToBody, type DecisionDraft } from "./decision-draft";
 import { decisionApi, decisionKey, DecisionRequestError, patchJson, postJson } from "./decision-fetch";
 import { OptionFields } from "./option-fields";
@@ -18,13 +19,15 @@ type Props = {
   rooms: { id: string; name: string }[];
   boards: { id: string; name: string }[];
   finishes: PickerFinish[];
+  /** The studio's markup and tax (studio settings), to show each price worked out as it is typed. */
+  rates: StudioRates;
   initial: DecisionDraft;
   /** Present when editing: the decision and the version the designer started from. */
   editing?: { decisionId: string; version: number };
 };
 
 /** The designer's form for a new decision or an open one: room, title, allowance, due date, 2–4 options. */
-export function DecisionForm({ projectId, installDate, rooms, boards, finishes, initial, editing }: Props) {
+export function DecisionForm({ projectId, installDate, rooms, boards, finishes, rates, initial, editing }: Props) {
   const router = useRouter();
   const queryClient = useQueryClient();
   const [draft, setDraft] = useState(initial);
@@ -68,7 +71,7 @@ export function DecisionForm({ projectId, installDate, rooms, boards, finishes, 
             ))}
           </Select>
         </Field>
-        <Field label="Allowance in the contract ($)" htmlFor="decision-allowance" hint="The prime-cost amount; prices are shown against it." error={errors.allowanceCents}>
+        <Field label="Allowance in the contract ($)" htmlFor="decision-allowance" hint="The prime-cost amount the client pays, including tax; prices are shown against it." error={errors.allowanceCents}>
           <Input id="decision-allowance" inputMode="decimal" value={draft.allowance} onChange={(e) => setDraft({ ...draft, allowance: e.target.value })} invalid={Boolean(errors.allowanceCents)} />
         </Field>
         <Field label="Client to decide by" htmlFor="decision-due" error={errors.dueDate}>
@@ -94,6 +97,7 @@ export function DecisionForm({ projectId, installDate, rooms, boards, finishes, 
           option={option}
           index={i}
           finishes={finishes}
+          rates={rates}
           boards={boards}
           errors={errors}
           canRemove={draft.options.length > 2}

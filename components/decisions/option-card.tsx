@@ -1,13 +1,16 @@
 import type { ReactNode } from "react";
 import { useId } from "react";
-import { Figure, Money, Notice, Swatch, cx } from "@/components/ui";
+import { Figure, Notice, Swatch, cx } from "@/components/ui";
 import { cautions, isCautionKey } from "@/lib/cautions";
 import type { OptionView } from "@/lib/decisions/types";
 import { AllowanceDifference } from "./allowance-difference";
 import { OptionChecksList } from "./option-checks-list";
+import { PriceWithTax, StaffPriceDetail } from "./price-build";
 
 type Props = {
   option: OptionView;
+  /** The studio's tax (1000 = GST 10 %), named beside the price. */
+  taxBasisPoints: number;
   /** Words shown above the name, e.g. "Your pick" or "Approved"; the ring says the same without words. */
   marker?: ReactNode;
   emphasised?: boolean;
@@ -17,7 +20,7 @@ type Props = {
 };
 
 /** One option as the client compares it: swatches on a neutral mount, finishes, price against the allowance, checks, cautions. */
-export function OptionCard({ option, marker, emphasised = false, children, headingLevel = 2 }: Props) {
+export function OptionCard({ option, taxBasisPoints, marker, emphasised = false, children, headingLevel = 2 }: Props) {
   const headingId = useId();
   const Heading = headingLevel === 2 ? "h2" : "h3";
   const keys = option.cautionKeys.filter(isCautionKey);
@@ -53,12 +56,13 @@ export function OptionCard({ option, marker, emphasised = false, children, headi
       </ul>
       <div>
         <p className="text-2xl font-semibold">
-          <Money cents={option.priceCents} />
+          <PriceWithTax cents={option.priceCents} taxBasisPoints={taxBasisPoints} />
         </p>
         <p className="font-medium text-ink-soft">
           <AllowanceDifference comparison={option.comparison} />
         </p>
       </div>
+      {option.priceDetail && <StaffPriceDetail detail={option.priceDetail} priceCents={option.priceCents} />}
       <OptionChecksList checks={option.checks} boardName={option.boardName} />
       {option.notes && <p className="text-ink-soft">{option.notes}</p>}
       {keys.map((key) => (

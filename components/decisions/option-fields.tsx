@@ -1,14 +1,18 @@
 "use client";
 
-import { Button, Field, Input, Select, Swatch, Textarea } from "@/components/ui";
+import { Button, Field, Input, Money, Select, Swatch, Textarea } from "@/components/ui";
 import type { PickerFinish } from "@/lib/decisions/types";
 import type { FieldErrors } from "@/lib/http";
+import type { StudioRates } from "@/lib/pricing/option-price";
 import { emptyLine, type LineDraft, type OptionDraft } from "./decision-draft";
+import { OptionPriceFields } from "./option-price-fields";
 
 type Props = {
   option: OptionDraft;
   index: number;
   finishes: PickerFinish[];
+  /** The studio's markup and tax, to work out the price as the designer types. */
+  rates: StudioRates;
   boards: { id: string; name: string }[];
   errors: FieldErrors | undefined;
   canRemove: boolean;
@@ -22,7 +26,7 @@ const categoryWords: Record<string, string> = {
 };
 
 /** One option in the designer's form: name, price, notes, board, and its finish lines. */
-export function OptionFields({ option, index, finishes, boards, errors, canRemove, onChange, onRemove }: Props) {
+export function OptionFields({ option, index, finishes, rates, boards, errors, canRemove, onChange, onRemove }: Props) {
   const path = `options.${index}`;
   const id = (field: string) => `option-${option.key}-${field}`;
   const setLine = (j: number, patch: Partial<LineDraft>) => onChange({ ...option, lines: option.lines.map((l, k) => (k === j ? { ...l, ...patch } : l)) });
@@ -30,14 +34,9 @@ export function OptionFields({ option, index, finishes, boards, errors, canRemov
   return (
     <fieldset className="space-y-4 rounded-lg border border-line bg-card p-4 sm:p-5">
       <legend className="px-1 font-display text-lg font-semibold">Option {index + 1}</legend>
-      <div className="grid gap-4 sm:grid-cols-[2fr_1fr]">
-        <Field label="Name the client sees" htmlFor={id("label")} error={errors?.[`${path}.label`]}>
-          <Input id={id("label")} value={option.label} onChange={(e) => onChange({ ...option, label: e.target.value })} invalid={Boolean(errors?.[`${path}.label`])} />
-        </Field>
-        <Field label="Price, including GST ($)" htmlFor={id("price")} error={errors?.[`${path}.priceCents`]}>
-          <Input id={id("price")} inputMode="decimal" value={option.price} onChange={(e) => onChange({ ...option, price: e.target.value })} invalid={Boolean(errors?.[`${path}.priceCents`])} />
-        </Field>
-      </div>
+      <Field label="Name the client sees" htmlFor={id("label")} error={errors?.[`${path}.label`]}>
+        <Input id={id("label")} value={option.label} onChange={(e) => onChange({ ...option, label: e.target.value })} invalid={Boolean(errors?.[`${path}.label`])} />
+      </Field>
       <Field label="Notes for the client" htmlFor={id("notes")} optional error={errors?.[`${path}.notes`]}>
         <Textarea id={id("notes")} rows={2} value={option.notes} onChange={(e) => onChange({ ...option, notes: e.target.value })} />
       </Field>
@@ -97,10 +96,15 @@ export function OptionFields({ option, index, finishes, boards, errors, canRemov
               <Button type="button" variant="quiet" disabled={option.lines.length < 2} onClick={() => onChange({ ...option, lines: option.lines.filter((_, k) => k !== j) })}>
                 Remove
               </Button>
-              {finish && <p className="text-sm text-ink-soft sm:col-span-6">Lead time {finish.leadTimeDays} days{finish.supplierName ? ` · ${finish.supplierName}` : ""}</p>}
+              {finish && (
+                <p className="text-sm text-ink-soft sm:col-span-6">
+                  <Money cents={finish.unitPriceCents} /> per {finish.unit}, excluding tax · lead time {finish.leadTimeDays} days{finish.supplierName ? ` · ${finish.supplierName}` : ""}
+                </p>
+              )}
             </div>
           );
         })}
+        <OptionPriceFields option={option} path={path} inputId={id("price")} finishes={finishes} rates={rates} errors={errors} onChange={onChange} />
         <div className="flex flex-wrap gap-2">
           <Button type="button" variant="secondary" disabled={option.lines.length >= 12} onClick={() => onChange({ ...option, lines: [...option.lines, emptyLine()] })}>
             Add a finish

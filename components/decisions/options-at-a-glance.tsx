@@ -1,11 +1,12 @@
 import { Money, cx, normaliseHex } from "@/components/ui";
 import type { OptionView } from "@/lib/decisions/types";
+import { taxWords } from "@/lib/pricing/option-price";
 
 /**
  * The options side by side even on a phone: chips, name, price and the difference from the
  * allowance in one row, each linking down to the full option.
  */
-export function OptionsAtAGlance({ options, pickedId }: { options: OptionView[]; pickedId: string | null }) {
+export function OptionsAtAGlance({ options, pickedId, taxBasisPoints }: { options: OptionView[]; pickedId: string | null; taxBasisPoints: number }) {
   return (
     <nav aria-label="The options at a glance" className="rounded-lg border border-line bg-card p-3">
       <ul className={cx("grid gap-2", options.length === 2 && "grid-cols-2", options.length === 3 && "grid-cols-3", options.length >= 4 && "grid-cols-4")}>
@@ -37,6 +38,7 @@ export function OptionsAtAGlance({ options, pickedId }: { options: OptionView[];
           </li>
         ))}
       </ul>
+      <p className="mt-2 px-1.5 text-sm text-ink-soft">Prices {taxWords(taxBasisPoints)}.</p>
     </nav>
   );
 }

@@ -72,7 +72,7 @@ export function StudioDecisionScreen({ initial, today }: { initial: DecisionView
       <div className={cx("grid gap-4 md:grid-cols-2", view.options.length > 2 && "xl:grid-cols-3")}>
         {view.options.map((o) => {
           const marker = o.id === view.lockedOptionId ? "Approved, carried by the decision" : view.currentChoice?.optionId === o.id ? `The clients' current pick (${view.currentChoice.by.name})` : o.addedByVariation ? "Added by a variation" : undefined;
-          return <OptionCard key={o.id} option={o} marker={marker} emphasised={o.id === view.lockedOptionId || view.currentChoice?.optionId === o.id} />;
+          return <OptionCard key={o.id} option={o} taxBasisPoints={view.taxBasisPoints} marker={marker} emphasised={o.id === view.lockedOptionId || view.currentChoice?.optionId === o.id} />;
         })}
       </div>
 

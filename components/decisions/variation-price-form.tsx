@@ -3,19 +3,31 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { Button, Field, Input, Money } from "@/components/ui";
-import { centsToInput, parseMoneyToCents } from "@/lib/decisions/money-input";
+import { buildOptionPrice, taxWords } from "@/lib/pricing/option-price";
+import { centsToInput, parseMoney } from "@/lib/pricing/parse-amount";
 import type { DecisionView, PickerFinish, VariationView } from "@/lib/decisions/types";
 import type { FieldErrors } from "@/lib/http";
-import { draftToBody, emptyOption } from "./decision-draft";
+import { draftToBody, emptyOption, readQuantity, type OptionDraft } from "./decision-draft";
 import { decisionApi, decisionKey, DecisionRequestError, postJson } from "./decision-fetch";
 import { OptionFields } from "./option-fields";
 
 type Props = { view: DecisionView; variation: VariationView; finishes: PickerFinish[]; boards: { id: string; name: string }[] };
 
+/** A new option's client price as the form would save it: typed by hand, or worked out from its lines. */
+function draftPrice(o: OptionDraft, finishes: PickerFinish[], rates: NonNullable<DecisionView["rates"]>): number | null {
+  if (o.priceSetByHand) {
+    const typed = parseMoney(o.price);
+    return typed.ok ? typed.value : null;
+  }
+  const lines = o.lines.map((l) => ({ unitPriceCents: finishes.find((f) => f.id === l.finishId)?.unitPriceCents, quantity: readQuantity(l.quantity) }));
+  if (lines.some((l) => l.unitPriceCents === undefined || l.quantity === null)) return null;
+  return buildOptionPrice(lines.map((l) => ({ unitPriceCents: l.unitPriceCents ?? 0, quantity: l.quantity ?? 0 })), rates).totalCents;
+}
+
 const KEEP = "keep";
 const NEW = "new";
 
-/** The designer prices a variation: what the decision will carry, the difference including GST, the time. */
+/** The designer prices a variation: what the decision will carry, the difference in the client's price including tax, the time. */
 export function VariationPriceForm({ view, variation, finishes, boards }: Props) {
   const queryClient = useQueryClient();
   const carried = view.options.find((o) => o.id === view.lockedOptionId);
@@ -31,14 +43,18 @@ export function VariationPriceForm({ view, variation, finishes, boards }: Props)
   });
   const serverErrors = price.error instanceof DecisionRequestError ? price.error.fieldErrors : undefined;
   const errors: FieldErrors = { ...serverErrors, ...localErrors };
+  const rates = view.rates ?? { markupBasisPoints: 0, taxBasisPoints: view.taxBasisPoints };
   const picked = others.find((o) => o.id === target);
-  const listDifference = picked && carried ? picked.priceCents - carried.priceCents : null;
+  // Both are client prices including tax, as the difference is.
+  const targetPrice = target === NEW ? draftPrice(newOption, finishes, rates) : (picked?.priceCents ?? null);
+  const listDifference = targetPrice !== null && carried ? targetPrice - carried.priceCents : null;
 
   function submit() {
-    const priceDeltaCents = parseMoneyToCents(delta, { allowNegative: true });
+    const deltaRead = parseMoney(delta, { allowNegative: true });
+    const priceDeltaCents = deltaRead.ok ? deltaRead.value : null;
     const timeImpactDays = /^-?\d+$/.test(days.trim()) ? Number(days) : null;
     const next: FieldErrors = {};
-    if (priceDeltaCents === null) next.priceDeltaCents = ["Enter the difference in dollars, e.g. 385 or -250 for a credit."];
+    if (!deltaRead.ok) next.priceDeltaCents = [delta.trim() ? deltaRead.message : "Enter the difference in dollars, e.g. 385 or -250 for a credit."];
     if (timeImpactDays === null) next.timeImpactDays = ["Enter a whole number of days (0 for none)."];
     let option: Record<string, unknown> = {};
     if (target === NEW) {
@@ -68,6 +84,7 @@ export function VariationPriceForm({ view, variation, finishes, boards }: Props)
           option={newOption}
           index={0}
           finishes={finishes}
+          rates={rates}
           boards={boards}
           errors={Object.fromEntries(Object.entries(errors).map(([k, v]) => [k.replace(/^newOption/, "options.0"), v]))}
           canRemove={false}
@@ -77,7 +94,7 @@ export function VariationPriceForm({ view, variation, finishes, boards }: Props)
       )}
       <div className="grid gap-4 sm:grid-cols-2">
         <Field
-          label="Price difference, including GST ($)"
+          label={`Price difference, ${taxWords(rates.taxBasisPoints)} ($)`}
           htmlFor="variation-delta"
           hint={listDifference !== null ? <>The option prices differ by <Money cents={listDifference} signed />; add any extra work, fees or restocking.</> : "Against what was approved; a credit is negative, e.g. -250."}
           error={errors.priceDeltaCents}

@@ -5,6 +5,7 @@ import { useRouter } from "next/navigation";
 import { useId, useState } from "react";
 import { Button, Field, Money, Textarea } from "@/components/ui";
 import type { DecisionView } from "@/lib/decisions/types";
+import { taxWords } from "@/lib/pricing/option-price";
 import { decisionApi, DecisionRequestError, postJson } from "./decision-fetch";
 
 type Props = { view: DecisionView; audience: "client" | "staff" };
@@ -44,7 +45,7 @@ export function VariationRequestForm({ view, audience }: Props) {
           <p id={`${groupId}-hint`} className="text-sm text-stone-600">
             Prices shown are the original quotes; the variation&apos;s price difference comes from {audience === "client" ? "your designer" : "you"}.
           </p>
-          {[{ id: "", label: "Something else: described above", priceCents: null }, ...others].map((o) => (
+          {[{ id: "", label: "Something else: described above", priceCents: null, priceDetail: null }, ...others].map((o) => (
             <label key={o.id || "none"} className="flex min-h-tap cursor-pointer items-center gap-3 rounded-md border border-line bg-card px-3 py-2">
               <input type="radio" name="variation-option" value={o.id} checked={optionId === o.id} onChange={() => setOptionId(o.id)} className="size-5 accent-spruce" />
               <span>
@@ -52,7 +53,8 @@ export function VariationRequestForm({ view, audience }: Props) {
                 {o.priceCents !== null && (
                   <span className="text-ink-soft">
                     {" "}
-                    · <Money cents={o.priceCents} />
+                    · <Money cents={o.priceCents} /> {taxWords(view.taxBasisPoints)}
+                    {o.priceDetail?.overridden && " · Price set by hand"}
                   </span>
                 )}
               </span>

@@ -1,6 +1,7 @@
 import { Money, Swatch } from "@/components/ui";
 import type { DecisionView, VariationView } from "@/lib/decisions/types";
 import { describeTimeImpact } from "@/lib/decisions/words";
+import { taxWords } from "@/lib/pricing/option-price";
 import { VariationStatusBadge } from "./status-badge";
 import { When } from "./when";
 
@@ -37,7 +38,7 @@ export function VariationSummary({ view, variation }: { view: DecisionView; vari
           </dd>
           <dt className="text-ink-soft">Price difference</dt>
           <dd className="text-xl font-semibold">
-            <Money cents={variation.priceDeltaCents ?? 0} signed /> <span className="text-base font-normal">including GST</span>
+            <Money cents={variation.priceDeltaCents ?? 0} signed /> <span className="text-base font-normal">{taxWords(view.taxBasisPoints)}</span>
           </dd>
           <dt className="text-ink-soft">Time</dt>
           <dd>{describeTimeImpact(variation.timeImpactDays)}</dd>

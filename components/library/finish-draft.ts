@@ -3,7 +3,8 @@ import type { ColourSource, FinishCategory } from "@/db/schema/library";
 import { deltaE2000, parseColour, toHex } from "@/lib/colour";
 import type { Lab } from "@/lib/colour";
 import type { Measurement } from "@/lib/uploads/measured";
-import { parseMoneyText } from "@/lib/validation/finish";
+import { ApiError } from "./library-api";
+import { parseMoney } from "@/lib/pricing/parse-amount";
 import { settleColour, type SettledColour } from "@/lib/validation/finish-colour";
 
 export type Photo = { id: string; url: string; thumbUrl: string; width: number; height: number };
@@ -70,12 +71,14 @@ function colourBody(d: FinishDraft) {
  * them, so saving other fields never nudges a stored colour through a hex round trip.
  */
 export function toRequestBody(d: FinishDraft, initial: FinishDraft | null) {
-  const price = parseMoneyText(d.price);
+  const price = parseMoney(d.price);
+  // A price the one money parser refuses is answered here, in its words ("Use a full stop for cents…").
+  if (!price.ok && d.price.trim() !== "") throw new ApiError(400, "Some fields need attention.", { unitPriceCents: [price.message] });
   const colourChanged =
     !initial || d.colourSource !== initial.colourSource || d.publishedColour !== initial.publishedColour || d.pickedLab !== initial.pickedLab;
   return {
     name: d.name, category: d.category || null, supplierId: d.supplierId || null, productCode: d.productCode, surface: d.surface,
-    format: d.format, unit: d.unit, unitPriceCents: price ?? (d.price.trim() === "" ? null : d.price), leadTimeDays: numberOrText(d.leadTime),
+    format: d.format, unit: d.unit, unitPriceCents: price.ok ? price.value : null, leadTimeDays: numberOrText(d.leadTime),
     careNotes: d.careNotes, cautions: d.cautions, imageId: d.photo?.id ?? null,
     ...(colourChanged ? { colour: colourBody(d) } : {}),
     ...(!initial || d.lrv !== initial.lrv || colourChanged ? { lrv: numberOrText(d.lrv) } : {}),

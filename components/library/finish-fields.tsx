@@ -51,7 +51,7 @@ export function PriceFields({ draft, errors, onChange }: Omit<Props, "suppliers"
   return (
     <div className="grid gap-4 sm:grid-cols-3">
       <TextInputField id="finish-unit" label="Priced per" hint="m², each, L, lineal m…" value={draft.unit} onValue={(unit) => onChange({ unit })} error={errors.unit} />
-      <TextInputField id="finish-price" label="Price per unit" hint="In dollars, before tax" inputMode="decimal" value={draft.price} onValue={(price) => onChange({ price })} error={errors.unitPriceCents} />
+      <TextInputField id="finish-price" label="Cost per unit, excluding GST/tax" hint="What the studio pays, in dollars. Clients' prices add markup and tax." inputMode="decimal" value={draft.price} onValue={(price) => onChange({ price })} error={errors.unitPriceCents} />
       <TextInputField id="finish-lead" label="Lead time (days)" hint="From order to delivery" inputMode="numeric" value={draft.leadTime} onValue={(leadTime) => onChange({ leadTime })} error={errors.leadTimeDays} />
     </div>
   );

@@ -69,7 +69,7 @@ export function FinishForm({ finishId, initial, suppliers }: Props) {
           <ColourSection draft={draft} errors={errors} onChange={change} />
         </div>
       </Card>
-      <Card title="Price and lead time">
+      <Card title="Cost and lead time">
         <PriceFields draft={draft} errors={errors} onChange={change} />
       </Card>
       <Card title="Care and cautions">

@@ -58,7 +58,7 @@ export function FinishTable({ initialQuery, suppliers }: Props) {
                 {header("Supplier", "supplier")}
                 {header("Code", "code")}
                 {header("Finish", "surface")}
-                {header("Price", "price", true)}
+                {header("Cost per unit, excluding GST/tax", "price", true)}
                 {header("Lead time", "lead", true)}
                 {header("LRV", "lrv", true)}
                 <Th>Cautions</Th>

@@ -6,6 +6,7 @@ import { FormMessage } from "@/components/auth/form-message";
 import { TextField } from "@/components/auth/text-field";
 import { Button, describeField, Field, Select } from "@/components/ui";
 import { firstInvalid, keptValue } from "@/lib/actions/result";
+import { tradeLabel } from "@/lib/suppliers/trades";
 import { whoValue } from "@/lib/validation/project-invite";
 
 type SupplierOption = { id: string; name: string; trade: string };
@@ -47,7 +48,7 @@ export function InviteToProjectForm({ projectId, suppliers }: { projectId: strin
             <optgroup label="A supplier's contact at">
               {suppliers.map((s) => (
                 <option key={s.id} value={whoValue("supplier", s.id)}>
-                  Contact at {s.name} ({s.trade})
+                  Contact at {s.name} ({tradeLabel(s.trade)})
                 </option>
               ))}
             </optgroup>

@@ -22,6 +22,7 @@ export async function listFinishesForPicker(studioId: string): Promise<PickerFin
     surface: f.surface,
     supplierName,
     unit: f.unit,
+    unitPriceCents: f.unitPriceCents,
     leadTimeDays: f.leadTimeDays,
     hex: toHex([f.labL, f.labA, f.labB]),
   }));

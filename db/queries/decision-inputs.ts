@@ -1,8 +1,10 @@
 import { and, eq, inArray } from "drizzle-orm";
-import { boards, finishes, optionLines, options, rooms } from "@/db/schema";
-import type { OptionInput } from "@/lib/validation/decision";
+import { boards, decisions, finishes, optionLines, options, projects, rooms } from "@/db/schema";
+import { buildOptionPrice } from "@/lib/pricing/option-price";
+import { isPriceSetByHand, type OptionInput } from "@/lib/validation/decision";
 import { HttpError, type FieldErrors } from "@/lib/http";
 import type { Tx } from "./serial-write";
+import { getStudioRates } from "./studio-settings";
 
 type NewOption = Omit<OptionInput, "id">;
 
@@ -45,10 +47,38 @@ export async function checkOptionInputs(tx: Tx, studioId: string, projectId: str
   if (Object.keys(errors).length) throw badInput(errors);
 }
 
+/**
+ * The price an option is saved with: as sent when the designer set it by hand, otherwise built
+ * from its lines with the studio's markup and tax (lib/pricing/option-price.ts).
+ */
+export async function resolveOptionPrice(tx: Tx, decisionId: string, o: NewOption): Promise<{ priceCents: number; priceOverridden: boolean }> {
+  if (isPriceSetByHand(o)) return { priceCents: o.priceCents, priceOverridden: true };
+  const [owner] = await tx
+    .select({ studioId: projects.studioId })
+    .from(decisions)
+    .innerJoin(projects, eq(projects.id, decisions.projectId))
+    .where(eq(decisions.id, decisionId));
+  if (!owner) throw new Error("option's decision not found");
+  const ids = [...new Set(o.lines.map((l) => l.finishId))];
+  const [rates, rows] = await Promise.all([
+    getStudioRates(owner.studioId, tx),
+    tx.select({ id: finishes.id, unitPriceCents: finishes.unitPriceCents }).from(finishes).where(and(inArray(finishes.id, ids), eq(finishes.studioId, owner.studioId))),
+  ]);
+  const unitPrice = new Map(rows.map((r) => [r.id, r.unitPriceCents]));
+  const lines = o.lines.map((l) => {
+    const unitPriceCents = unitPrice.get(l.finishId);
+    // checkOptionInputs refused finishes from outside the studio before anything was written.
+    if (unitPriceCents === undefined) throw new Error("option line's finish not in the studio");
+    return { unitPriceCents, quantity: l.quantity };
+  });
+  return { priceCents: buildOptionPrice(lines, rates).totalCents, priceOverridden: false };
+}
+
 export async function insertOption(tx: Tx, decisionId: string, o: NewOption, sortOrder: number, addedByVariation = false) {
+  const price = await resolveOptionPrice(tx, decisionId, o);
   const [row] = await tx
     .insert(options)
-    .values({ decisionId, label: o.label, priceCents: o.priceCents, notes: o.notes, boardId: o.boardId, sortOrder, addedByVariation })
+    .values({ decisionId, label: o.label, ...price, notes: o.notes, boardId: o.boardId, sortOrder, addedByVariation })
     .returning();
   if (!row) throw new Error("option insert returned nothing");
   await insertLines(tx, row.id, o.lines);

@@ -6,6 +6,7 @@ import { toHex, type ThresholdOverrides } from "@/lib/colour";
 import { compareToAllowance } from "@/lib/decisions/budget";
 import { checkBoardPairs, checkFinishesTogether, type BoardPair, type CheckFinish } from "@/lib/decisions/option-checks";
 import type { LineView, OptionView } from "@/lib/decisions/types";
+import { buildOptionPrice, type StudioRates } from "@/lib/pricing/option-price";
 
 type Reader = Pick<typeof db, "select">;
 
@@ -19,11 +20,15 @@ const toCheckFinish = (f: FinishColour): CheckFinish => ({
   lrvSource: f.lrvSource,
 });
 
-/** The options of one decision with their finishes, price against the allowance and colour checks. */
+/**
+ * The options of one decision with their finishes, price against the allowance and colour checks.
+ * Pass `staffRates` (staff only) to include how each price is built; clients never get the cost.
+ */
 export async function loadOptionViews(
   decision: { id: string; allowanceCents: number },
   thresholds: ThresholdOverrides | undefined,
   reader: Reader = db,
+  staffRates: StudioRates | null = null,
 ): Promise<OptionView[]> {
   const optionRows = await reader
     .select({ option: options, boardName: boards.name })
@@ -71,10 +76,12 @@ export async function loadOptionViews(
           lineRows.filter((r) => r.line.optionId === option.id).map((r) => toCheckFinish(r.finish)),
           thresholds,
         );
+    const priceLines = lineRows.filter((r) => r.line.optionId === option.id).map((r) => ({ unitPriceCents: r.finish.unitPriceCents, quantity: r.line.quantity }));
     return {
       id: option.id,
       label: option.label,
       priceCents: option.priceCents,
+      priceDetail: staffRates ? { overridden: option.priceOverridden, build: buildOptionPrice(priceLines, staffRates), rates: staffRates } : null,
       notes: option.notes,
       boardId: option.boardId,
       boardName,

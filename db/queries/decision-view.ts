@@ -7,6 +7,8 @@ import type { ApprovalView, ChoiceView, DecisionView, PersonRef, VariationView }
 import { loadBudgetDecisions } from "./decision-budget";
 import { loadOptionViews } from "./decision-options";
 import { getDecisionAccess, getStudioThresholds, loadOrderBy, specNeedsRevision, type DecisionAccess } from "./decisions";
+import { nameOnProject } from "./people-names";
+import { getStudioRates } from "./studio-settings";
 import type { Actor } from "./users";
 
 type Reader = Pick<typeof db, "select">;
@@ -25,12 +27,12 @@ export async function getDecisionView(actor: Actor, decisionId: string): Promise
 
 export async function buildDecisionView(actor: Actor, access: DecisionAccess, reader: Reader = db): Promise<DecisionView> {
   const { decision: d, project, role } = access;
-  const thresholds = await getStudioThresholds(project.studioId, reader);
+  const [thresholds, rates] = await Promise.all([getStudioThresholds(project.studioId, reader), getStudioRates(project.studioId, reader)]);
   const [room] = await reader.select({ name: rooms.name }).from(rooms).where(eq(rooms.id, d.roomId));
   const [optionViews, choiceRows, [choiceCount], approvalRows, variationRows, orderBy, budgetRows, needsRevision] = await Promise.all([
-    loadOptionViews(d, thresholds, reader),
+    loadOptionViews(d, thresholds, reader, role === "staff" ? rates : null),
     reader
-      .select({ choice: choices, name: users.name, email: users.email })
+      .select({ choice: choices, name: nameOnProject(project.id), email: users.email })
       .from(choices)
       .innerJoin(users, eq(users.id, choices.userId))
       .where(eq(choices.decisionId, d.id))
@@ -38,12 +40,12 @@ export async function buildDecisionView(actor: Actor, access: DecisionAccess, re
       .limit(CHOICES_SHOWN),
     reader.select({ total: count() }).from(choices).where(eq(choices.decisionId, d.id)),
     reader
-      .select({ approval: approvals, name: users.name, email: users.email })
+      .select({ approval: approvals, name: nameOnProject(project.id), email: users.email })
       .from(approvals)
       .innerJoin(users, eq(users.id, approvals.userId))
       .where(eq(approvals.decisionId, d.id))
       .orderBy(asc(approvals.approvedAt)),
-    loadVariations(d.id, reader),
+    loadVariations(d.id, project.id, reader),
     loadOrderBy([d.id], project.installDate, reader),
     loadBudgetDecisions(project.id, reader),
     role === "staff" ? specNeedsRevision(project.id, d.id, reader) : Promise.resolve(false),
@@ -83,6 +85,8 @@ export async function buildDecisionView(actor: Actor, access: DecisionAccess, re
     orderBy: orderBy.get(d.id) ?? null,
     viewer: { id: actor.userId, role },
     options: optionViews,
+    taxBasisPoints: rates.taxBasisPoints,
+    rates: role === "staff" ? rates : null,
     // Once locked, the pick that matters is the approval; the history stays readable.
     currentChoice: d.status === "locked" ? null : (choiceViews[0] ?? null),
     choices: choiceViews,
@@ -94,16 +98,16 @@ export async function buildDecisionView(actor: Actor, access: DecisionAccess, re
   };
 }
 
-async function loadVariations(decisionId: string, reader: Reader): Promise<Omit<VariationView, "optionLabel">[]> {
+async function loadVariations(decisionId: string, projectId: string, reader: Reader): Promise<Omit<VariationView, "optionLabel">[]> {
   const requester = alias(users, "requester");
   const pricer = alias(users, "pricer");
   const decider = alias(users, "decider");
   const rows = await reader
     .select({
       v: variations,
-      requester: { name: requester.name, email: requester.email },
-      pricer: { name: pricer.name, email: pricer.email },
-      decider: { name: decider.name, email: decider.email },
+      requester: { name: nameOnProject(projectId, "requester"), email: requester.email },
+      pricer: { name: nameOnProject(projectId, "pricer"), email: pricer.email },
+      decider: { name: nameOnProject(projectId, "decider"), email: decider.email },
     })
     .from(variations)
     .innerJoin(requester, eq(requester.id, variations.requestedBy))

@@ -4,7 +4,7 @@ import type { CreateDecisionInput, UpdateDecisionInput } from "@/lib/validation/
 import { conflict, forbidden, HttpError } from "@/lib/http";
 import { writeAudit } from "./audit";
 import { loadLatestChoices } from "./decision-budget";
-import { checkOptionInputs, insertLines, insertOption, LOCKED_MESSAGE, resolveRoom, STALE_MESSAGE } from "./decision-inputs";
+import { checkOptionInputs, insertLines, insertOption, LOCKED_MESSAGE, resolveOptionPrice, resolveRoom, STALE_MESSAGE } from "./decision-inputs";
 import { getDecisionAccess } from "./decisions";
 import { getProjectForStaff } from "./projects";
 import { writeTransaction } from "./serial-write";
@@ -78,9 +78,10 @@ export async function updateDecision(actor: Actor, decisionId: string, input: Up
     if (kept.length) await tx.delete(optionLines).where(inArray(optionLines.optionId, kept));
     for (const [i, o] of input.options.entries()) {
       if (o.id && existingIds.has(o.id)) {
+        const price = await resolveOptionPrice(tx, decision.id, o);
         await tx
           .update(options)
-          .set({ label: o.label, priceCents: o.priceCents, notes: o.notes, boardId: o.boardId, sortOrder: i })
+          .set({ label: o.label, ...price, notes: o.notes, boardId: o.boardId, sortOrder: i })
           .where(eq(options.id, o.id));
         await insertLines(tx, o.id, o.lines);
       } else {

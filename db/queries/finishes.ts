@@ -66,6 +66,7 @@ async function checkReferences(studioId: string, refs: { supplierId?: string | n
   if (refs.supplierId) {
     const supplier = await db.query.suppliers.findFirst({ where: and(eq(suppliers.id, refs.supplierId), eq(suppliers.studioId, studioId)) });
     if (!supplier) throw badField("supplierId", "Choose one of your studio's suppliers.");
+    if (supplier.archivedAt) throw badField("supplierId", `${supplier.name} is archived; bring it back in Suppliers first, or choose another.`);
   }
   if (refs.imageId) {
     const image = await db.query.images.findFirst({ where: and(eq(images.id, refs.imageId), eq(images.studioId, studioId)) });

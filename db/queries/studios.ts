@@ -1,11 +1,12 @@
 import bcrypt from "bcryptjs";
-import { and, asc, eq } from "drizzle-orm";
+import { and, asc, eq, isNull } from "drizzle-orm";
 import { db } from "@/db";
 import { writeTransaction } from "./serial-write";
 import { studioMembers, studios, suppliers, users } from "@/db/schema";
 import { conflict } from "@/lib/http";
 import type { SignUpInput } from "@/lib/validation/auth";
 import { writeAudit } from "./audit";
+import { takeInviteAllowance } from "./invite-limits";
 
 export const PASSWORD_COST = 11;
 
@@ -34,29 +35,35 @@ export async function createStudioWithOwner(input: SignUpInput): Promise<SignUpO
   });
 }
 
-/** Adds a designer to the studio; the person signs in with an e-mailed link. */
-export async function addDesigner(studioId: string, invitedBy: string, input: { email: string; name: string }) {
+/**
+ * What the team invite e-mails: "added" (a new person, now a designer, who signs in by e-mailed
+ * link) or "has-account" (nothing added; they get a note to ask for an invitation to another
+ * address). The owner is told the same either way, so the form can't be used to learn who has an
+ * account or works for another studio.
+ */
+export type DesignerInviteOutcome = { kind: "added" | "has-account"; email: string };
+
+/**
+ * Adds a designer to the studio. Inviting again someone already added who hasn't signed in yet
+ * sends the e-mail again; someone on this studio's staff who has (the owner sees them listed) is 409.
+ * Every invitation, either way, counts against the invitation limits (invite-limits.ts).
+ */
+export async function addDesigner(studioId: string, invitedBy: string, input: { email: string; name: string }): Promise<DesignerInviteOutcome> {
   return writeTransaction(async (tx) => {
-    let user = await tx.query.users.findFirst({ where: eq(users.email, input.email) });
-    if (user) {
-      const staff = await tx.query.studioMembers.findFirst({ where: eq(studioMembers.userId, user.id) });
-      if (staff) {
-        throw conflict(
-          staff.studioId === studioId
-            ? "That person is already on your studio's staff."
-            : "That e-mail address belongs to another studio's staff.",
-        );
-      }
-    } else {
-      [user] = await tx.insert(users).values({ email: input.email, name: input.name }).returning();
-    }
-    if (!user) throw new Error("designer insert returned nothing");
-    await tx.insert(studioMembers).values({ studioId, userId: user.id, role: "designer" });
+    const user = await tx.query.users.findFirst({ where: eq(users.email, input.email) });
+    const ours = user ? await tx.query.studioMembers.findFirst({ where: and(eq(studioMembers.userId, user.id), eq(studioMembers.studioId, studioId)) }) : undefined;
+    if (user && ours && (user.emailVerified || user.passwordHash)) throw conflict("That person is already on your studio's staff.");
+    await takeInviteAllowance(tx, studioId, input.email);
+    if (user && ours) return { kind: "added", email: user.email };
+    if (user) return { kind: "has-account", email: user.email };
+    const [created] = await tx.insert(users).values({ email: input.email, name: input.name }).returning();
+    if (!created) throw new Error("designer insert returned nothing");
+    await tx.insert(studioMembers).values({ studioId, userId: created.id, role: "designer" });
     await writeAudit(
-      { studioId, actorId: invitedBy, action: "designer.invited", entityType: "user", entityId: user.id, detail: { email: input.email } },
+      { studioId, actorId: invitedBy, action: "designer.invited", entityType: "user", entityId: created.id, detail: { email: input.email } },
       tx,
     );
-    return user;
+    return { kind: "added", email: created.email };
   });
 }
 
@@ -69,8 +76,13 @@ export async function listStaff(studioId: string) {
     .orderBy(asc(studioMembers.role), asc(users.name));
 }
 
+/** The studio's suppliers that may be chosen for something new: archived ones are left out. */
 export async function listSuppliers(studioId: string) {
-  return db.select().from(suppliers).where(eq(suppliers.studioId, studioId)).orderBy(asc(suppliers.name));
+  return db
+    .select()
+    .from(suppliers)
+    .where(and(eq(suppliers.studioId, studioId), isNull(suppliers.archivedAt)))
+    .orderBy(asc(suppliers.name));
 }
 
 export async function getSupplierInStudio(studioId: string, supplierId: string) {

@@ -1,5 +1,8 @@
+import { eq, sql } from "drizzle-orm";
 import type { Database } from "@/db/client";
 import * as t from "@/db/schema";
+import { buildOptionPrice, type StudioRates } from "@/lib/pricing/option-price";
+import { demoFinishes } from "./demo-finishes";
 import { demoId } from "./ids";
 
 type Line = [finishKey: string, quantity: number, unit: string];
@@ -48,8 +51,31 @@ const decisionSpecs: DecisionSpec[] = [
     ] },
 ];
 
+/**
+ * The demo's prices were typed by hand before prices were worked out from the lines, so each is
+ * marked "set by hand" unless it happens to equal the price its lines build with the studio's rates.
+ */
+function isSetByHand(o: OptionSpec, rates: StudioRates): boolean {
+  const lines = o.lines.map(([key, quantity]) => {
+    const finish = demoFinishes.find((f) => f.key === key);
+    if (!finish) throw new Error(`demo option ${o.key} names an unknown finish ${key}`);
+    return { unitPriceCents: finish.price, quantity };
+  });
+  return buildOptionPrice(lines, rates).totalCents !== o.price;
+}
+
+async function studioRates(db: Database, projectId: string): Promise<StudioRates> {
+  const [row] = await db
+    .select({ markupBasisPoints: t.studios.markupBasisPoints, taxBasisPoints: t.studios.taxBasisPoints })
+    .from(t.projects)
+    .innerJoin(t.studios, eq(t.studios.id, t.projects.studioId))
+    .where(eq(t.projects.id, projectId));
+  return row ?? { markupBasisPoints: 0, taxBasisPoints: 1000 };
+}
+
 /** Decisions in every state: open, chosen, locked, and locked then varied. */
 export async function seedDemoDecisions(db: Database, ctx: { project: string; user: (key: string) => string }) {
+  const rates = await studioRates(db, ctx.project);
   for (const d of decisionSpecs) {
     await db.insert(t.decisions).values({
       id: demoId("decision", d.key), projectId: ctx.project, roomId: demoId("room", d.room), title: d.title,
@@ -60,9 +86,15 @@ export async function seedDemoDecisions(db: Database, ctx: { project: string; us
     for (const [i, o] of d.options.entries()) {
       await db.insert(t.options).values({
         id: demoId("option", o.key), decisionId: demoId("decision", d.key), label: o.label, priceCents: o.price,
-        notes: o.notes ?? null, sortOrder: i, addedByVariation: o.key === "lb-chalk",
+        priceOverridden: isSetByHand(o, rates), notes: o.notes ?? null, sortOrder: i, addedByVariation: o.key === "lb-chalk",
         boardId: d.key === "kitchen-benchtop" && i === 0 ? demoId("board", "kitchen-a") : null,
-      }).onConflictDoNothing();
+      }).onConflictDoUpdate({
+        // A demo database seeded before prices were worked out has every option unmarked; mark the
+        // ones still carrying the seed's typed price, and leave any a designer has changed since.
+        target: t.options.id,
+        set: { priceOverridden: isSetByHand(o, rates) },
+        setWhere: sql`${t.options.priceCents} = ${o.price} and ${t.options.priceOverridden} = 0`,
+      });
       await db.insert(t.optionLines).values(o.lines.map(([finish, quantity, unit], j) => ({
         id: demoId("line", `${o.key}-${j}`), optionId: demoId("option", o.key), finishId: demoId("finish", finish), quantity, unit, sortOrder: j,
       }))).onConflictDoNothing();

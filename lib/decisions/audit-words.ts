@@ -28,6 +28,17 @@ const phrases: Record<string, (d: Detail) => string> = {
   "variation.approved": (d) => `approved a variation to${quoted(d, "title")}${quoted(d, "option") ? `, which now carries${quoted(d, "option")}` : ""}`,
   "variation.declined": (d) => `declined a variation to${quoted(d, "title")}`,
   "variation.withdrawn": (d) => `withdrew a variation to${quoted(d, "title")}`,
+  "project.updated": () => "changed the project's details",
+  "room.added": (d) => `added the room${quoted(d, "title")}`,
+  "room.renamed": (d) => `renamed the room${quoted(d, "from")} to${quoted(d, "title")}`,
+  "room.moved": (d) => `moved the room${quoted(d, "title")} in the list`,
+  "room.removed": (d) => `removed the room${quoted(d, "title")}`,
+  "member.role_changed": (d) => `made ${text(d, "name") ?? "someone"} ${text(d, "to") === "client" ? "a client" : `the ${text(d, "to") ?? "contact at a supplier"}`}`,
+  "member.removed": (d) => `took ${text(d, "name") ?? "someone"} off the project`,
+  "invitation.withdrawn": (d) => `withdrew the invitation${text(d, "email") ? ` to ${text(d, "email")}` : ""}`,
+  "account.updated": () => "changed their own name or phone",
+  "account.password_set": () => "set a password",
+  "account.password_changed": () => "changed their password",
 };
 
 export function describeAudit(action: string, detail: Detail): string {

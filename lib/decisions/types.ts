@@ -1,4 +1,5 @@
 import type { DecisionStatus, VariationStatus } from "@/db/schema";
+import type { PriceBuild, StudioRates } from "@/lib/pricing/option-price";
 import type { AllowanceComparison, BudgetSummary } from "./budget";
 import type { OptionChecks } from "./option-checks";
 import type { OrderBySuggestion } from "./order-by";
@@ -25,10 +26,19 @@ export type LineView = {
   cautions: string[];
 };
 
+/**
+ * Staff only: how the option's price is built from its lines today (cost excludes tax, the total
+ * includes it), and whether the stored price was set by hand instead.
+ */
+export type OptionPriceDetail = { overridden: boolean; build: PriceBuild; rates: StudioRates };
+
 export type OptionView = {
   id: string;
   label: string;
+  /** The client's price, including tax. */
   priceCents: number;
+  /** null for clients: they see only the price including tax. */
+  priceDetail: OptionPriceDetail | null;
   notes: string | null;
   boardId: string | null;
   boardName: string | null;
@@ -87,6 +97,10 @@ export type DecisionView = {
   orderBy: OrderBySuggestion | null;
   viewer: { id: string; role: "staff" | "client" };
   options: OptionView[];
+  /** The studio's tax on every price shown (1000 = GST 10 %), for the words beside a price. */
+  taxBasisPoints: number;
+  /** Staff only: the studio's markup and tax, for working out prices in the forms. */
+  rates: StudioRates | null;
   currentChoice: ChoiceView | null;
   /** The newest picks first, at most a screenful; `earlierChoiceCount` more are not listed. */
   choices: ChoiceView[];
@@ -123,6 +137,8 @@ export type PickerFinish = {
   surface: string | null;
   supplierName: string | null;
   unit: string;
+  /** Cost to the studio per unit, excluding tax. */
+  unitPriceCents: number;
   leadTimeDays: number;
   hex: string;
 };

@@ -27,11 +27,20 @@ export const optionLineSchema = z.object({
   location: optionalText(80),
 });
 
-export const optionSchema = z.object({
+const optionFields = z.object({
   /** Present when editing an option that already exists. */
   id: z.string().trim().min(1).optional(),
   label: z.string({ error: "Name this option." }).trim().min(1, "Name this option.").max(120, "Use at most 120 characters."),
-  priceCents: cents("price"),
+  /**
+   * The client's price including tax. Leave it out to have it built from the lines (cost × markup ×
+   * tax, lib/pricing/option-price.ts); send it to set the price by hand.
+   */
+  priceCents: cents("price").optional(),
+  /**
+   * true: the price was set by hand and is kept as sent. false: it is built from the lines and any
+   * priceCents sent is ignored. Left out: set by hand exactly when priceCents is sent.
+   */
+  priceOverridden: z.boolean({ error: "priceOverridden is true or false." }).optional(),
   notes: optionalText(1000),
   boardId: optionalText(100),
   lines: z
@@ -39,6 +48,23 @@ export const optionSchema = z.object({
     .min(1, "Add at least one finish.")
     .max(12, "At most 12 finishes in one option."),
 });
+
+type PriceChoice = { priceCents?: number; priceOverridden?: boolean };
+
+/** True when the designer set this option's price by hand (see the fields above). */
+export function isPriceSetByHand(o: PriceChoice): o is PriceChoice & { priceCents: number } {
+  return o.priceCents !== undefined && o.priceOverridden !== false;
+}
+
+function checkPriceChoice(o: PriceChoice, ctx: z.RefinementCtx) {
+  if (o.priceOverridden === true && o.priceCents === undefined) {
+    ctx.addIssue({ code: "custom", path: ["priceCents"], message: "Enter the price you are setting by hand, or let it be worked out from the finishes." });
+  }
+}
+
+export const optionSchema = optionFields.superRefine(checkPriceChoice);
+/** An option a variation adds: the same, without an id. */
+export const newOptionSchema = optionFields.omit({ id: true }).superRefine(checkPriceChoice);
 export type OptionInput = z.infer<typeof optionSchema>;
 
 const decisionFields = {
@@ -110,7 +136,7 @@ export const variationPriceSchema = z
     /** The option the decision will carry; leave out to keep the current one (a change of work, not of finish). */
     optionId: optionalText(100),
     /** Or a new option, added to the decision by this variation. */
-    newOption: optionSchema.omit({ id: true }).optional(),
+    newOption: newOptionSchema.optional(),
   })
   .refine((v) => !(v.optionId && v.newOption), { message: "Pick an existing option or describe a new one, not both.", path: ["optionId"] });
 export type VariationPriceInput = z.infer<typeof variationPriceSchema>;

@@ -1,6 +1,7 @@
 import { restoreCell } from "@/lib/csv-cell";
 import { cautions, isCautionKey } from "@/lib/cautions";
-import { finishCategoryKeys, finishCategoryLabels, finishInputSchema, parseMoneyText, type FinishInput } from "./finish";
+import { parseMoney } from "@/lib/pricing/parse-amount";
+import { finishCategoryKeys, finishCategoryLabels, finishInputSchema, type FinishInput } from "./finish";
 
 /** Columns of the library's CSV, in the order export writes them. The first nine are required on import except supplier, code, finish and format. */
 export const csvColumns = [
@@ -98,8 +99,13 @@ export type CsvRowResult = { ok: true; input: FinishInput; supplierName: string 
 export function readCsvRow(cells: Partial<Record<CsvColumn, string>>): CsvRowResult {
   const cell = (c: CsvColumn) => restoreCell((cells[c] ?? "").trim());
   const errors: string[] = [];
-  const price = parseMoneyText(cell("unit_price"));
-  if (price === null) errors.push(`unit_price: "${cell("unit_price")}" isn't an amount of dollars, like 680 or 680.50.`);
+  const priceRead = parseMoney(cell("unit_price"));
+  const price = priceRead.ok ? priceRead.value : null;
+  if (!priceRead.ok) {
+    // The parser's own sentence when it says something specific ("Use a full stop for cents…").
+    const specific = /^(That isn't|Enter an amount)/.test(priceRead.message) ? "" : ` ${priceRead.message}`;
+    errors.push(`unit_price: "${cell("unit_price")}" isn't an amount of dollars, like 680 or 680.50.${specific}`);
+  }
   const lead = readNumber(cell("lead_time_days"));
   if (cell("lead_time_days") !== "" && lead === null) errors.push(`lead_time_days: "${cell("lead_time_days")}" isn't a number of days.`);
   const lrvText = cell("lrv");

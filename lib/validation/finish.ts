@@ -23,14 +23,6 @@ export const finishCategoryKeys = Object.keys(finishCategoryLabels) as [FinishCa
 export const MAX_LEAD_TIME_DAYS = 730;
 const MAX_PRICE_CENTS = 100_000_000_00;
 
-/** "$1,234.50", "1234.5" or "680" → cents; null when it isn't a plain amount of money. */
-export function parseMoneyText(text: string): number | null {
-  const cleaned = text.trim().replace(/^\$\s*/, "").replace(/,(?=\d{3}(\D|$))/g, "");
-  if (!/^\d+(\.\d{1,2})?$/.test(cleaned)) return null;
-  const [whole = "0", part = ""] = cleaned.split(".");
-  return Number(whole) * 100 + Number(part.padEnd(2, "0"));
-}
-
 const optionalText = (max: number) =>
   z
     .string()

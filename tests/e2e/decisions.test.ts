@@ -48,14 +48,18 @@ describe("a client decides on a phone", () => {
     await designer.getByLabel("Allowance in the contract ($)").fill("1,200");
     await designer.getByLabel("Client to decide by").fill(inDays(30));
     const names = designer.getByLabel("Name the client sees");
-    const prices = designer.getByLabel("Price, including GST ($)");
+    // These prices are set by hand (a price is otherwise worked out from the finishes).
+    const byHand = designer.getByLabel("Set this price by hand");
+    const prices = designer.getByLabel("Price set by hand, including GST ($)");
     const finishes = designer.getByLabel("Finish", { exact: true });
     await names.nth(0).fill("Natural oak");
-    await prices.nth(0).fill("980");
     await finishes.nth(0).selectOption({ label: "Natural Oak Veneer · TJ-VN-201" });
+    await byHand.nth(0).check();
+    await prices.nth(0).fill("980");
     await names.nth(1).fill("Walnut");
-    await prices.nth(1).fill("1340.00");
     await finishes.nth(1).selectOption({ label: "Walnut Veneer · TJ-VN-230" });
+    await byHand.nth(1).check();
+    await prices.nth(1).fill("1340.00");
     await expect(designer.getByText(/Suggested order-by date/).isVisible()).resolves.toBe(true);
     await snap(designer, "decision-new-designer");
     await designer.getByRole("button", { name: "Open the decision" }).click();

@@ -51,7 +51,7 @@ describe("the materials library", () => {
     await expect(page.getByRole("radio", { name: /Measured from the sample photo/ }).isChecked()).resolves.toBe(true);
     await expect(page.getByText(/LRV used: [\d.]+, measured from the photo/).isVisible()).resolves.toBe(true);
 
-    await page.getByLabel("Price per unit").fill("129.00");
+    await page.getByLabel("Cost per unit, excluding GST/tax").fill("129.00");
     await page.getByLabel("Lead time (days)").fill("35");
     await page.getByLabel(/Slip resistance in wet areas/).check();
     // The preview comes through the authenticated photo route; wait for it before the screenshot.

@@ -47,6 +47,13 @@ describe("readCsvRow", () => {
     expect(result.errors.map((e) => e.split(":")[0]).sort()).toEqual(["category", "cautions", "colour", "lead_time_days", "name", "unit_price"]);
   });
 
+  it("reads prices with the one money parser: 12,34 is refused with its reason (our rule; see tests/unit/pricing)", () => {
+    const result = readCsvRow({ ...row, unit_price: "12,34" });
+    expect(result.ok).toBe(false);
+    if (result.ok) return;
+    expect(result.errors).toEqual(['unit_price: "12,34" isn\'t an amount of dollars, like 680 or 680.50. Use a full stop for cents, like 12.34.']);
+  });
+
   it("asks for a colour or an LRV when both are blank", () => {
     const result = readCsvRow({ ...row, lrv: "" });
     expect(result).toEqual({ ok: false, errors: ["colour: give the maker's colour (like #d9d2c3) or its LRV."] });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { lightReflectance, parseColour } from "@/lib/colour";
-import { finishInputSchema, finishListQuerySchema, finishPatchSchema, parseMoneyText } from "@/lib/validation/finish";
+import { finishInputSchema, finishListQuerySchema, finishPatchSchema } from "@/lib/validation/finish";
 import { lightnessForLrv, settleColour } from "@/lib/validation/finish-colour";
 
 const base = {
@@ -11,16 +11,6 @@ const base = {
   leadTimeDays: 21,
   colour: { source: "published", value: "#d9d2c3" },
 };
-
-describe("parseMoneyText", () => {
-  it.each([
-    ["680", 68000],
-    ["680.5", 68050],
-    ["$1,234.50", 123450],
-    [" 0.99 ", 99],
-  ])("%j → %i cents", (text, cents) => expect(parseMoneyText(text)).toBe(cents));
-  it.each(["", "abc", "-5", "1.234", "12,34", "1e3"])("%j is not money", (text) => expect(parseMoneyText(text)).toBeNull());
-});
 
 describe("finishInputSchema", () => {
   it("takes a finish with a published hex colour and fills the optional fields", () => {

@@ -30,7 +30,8 @@ export default async function ProjectDecisionsPage({ params }: Props) {
       />
       {items.length === 0 ? (
         <EmptyState title="No decisions yet" action={<LinkButton href={newHref}>Open the first decision</LinkButton>}>
-          A decision gives the clients two to four options to compare on their phone, with prices against the allowance.
+          A decision gives the clients two to four options to compare on their phone, with prices against the allowance. Each option is made of
+          finishes from your library, so add those first if the library is empty.
         </EmptyState>
       ) : (
         <Table caption="Decisions by due date" captionHidden>

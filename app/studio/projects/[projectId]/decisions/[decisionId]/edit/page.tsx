@@ -3,6 +3,7 @@ import { notFound } from "next/navigation";
 import { getDecisionView } from "@/db/queries/decision-view";
 import { listBoardsForPicker, listFinishesForPicker } from "@/db/queries/decision-finishes";
 import { listRooms } from "@/db/queries/projects";
+import { getStudioRates } from "@/db/queries/studio-settings";
 import { draftFromView } from "@/components/decisions/decision-draft";
 import { DecisionForm } from "@/components/decisions/decision-form";
 import { LinkButton, Notice, PageHeader } from "@/components/ui";
@@ -45,6 +46,7 @@ export default async function EditDecisionPage({ params }: Props) {
         rooms={rooms}
         boards={boards}
         finishes={finishes}
+        rates={view.rates ?? (await getStudioRates(studioId))}
         initial={draftFromView(view)}
         editing={{ decisionId, version: view.version }}
       />
