@@ -1,10 +1,11 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { listDecisionsNeedingAttention, todayUtc } from "@/db/queries/attention";
+import { getStudioAttention, todayUtc } from "@/db/queries/attention";
 import { listProjectsForActor } from "@/db/queries/projects";
-import { Badge, Card, EmptyState, LinkButton, PageHeader } from "@/components/ui";
+import { StudioAttentionList } from "@/components/attention/studio-attention";
+import { Card, EmptyState, LinkButton, PageHeader } from "@/components/ui";
 import { requireRole } from "@/lib/auth/session";
-import { describeDue, formatDay } from "@/lib/format";
+import { formatDay } from "@/lib/format";
 
 export const metadata: Metadata = { title: "Projects" };
 
@@ -13,7 +14,7 @@ export default async function StudioHome() {
   const today = todayUtc();
   const [projects, attention] = await Promise.all([
     listProjectsForActor(actor),
-    listDecisionsNeedingAttention(actor.studio?.id ?? "", today),
+    getStudioAttention(actor, today),
   ]);
   return (
     <div className="space-y-8">
@@ -22,30 +23,28 @@ export default async function StudioHome() {
         title="Projects"
         actions={<LinkButton href="/studio/projects/new">New project</LinkButton>}
       />
-      <Card title="Needs attention">
-        {attention.length === 0 ? (
-          <p className="text-ink-soft">Nothing is due in the next three weeks. Decisions waiting on clients will show here.</p>
-        ) : (
-          <ul className="divide-y divide-line">
-            {attention.map((d) => (
-              <li key={d.id} className="flex flex-wrap items-center justify-between gap-2 py-3">
-                <span>
-                  <Link className="font-medium underline-offset-4 hover:underline" href={`/studio/projects/${d.projectId}`}>
-                    {d.title}
-                  </Link>
-                  <span className="text-ink-soft"> · {d.roomName} · {d.projectName}</span>
-                </span>
-                <Badge tone={d.dueDate < today ? "problem" : "caution"}>
-                  {describeDue(d.dueDate, today)} ({formatDay(d.dueDate)})
-                </Badge>
-              </li>
-            ))}
-          </ul>
-        )}
-      </Card>
+      {projects.length > 0 && (
+        <Card title="Needs attention">
+          <StudioAttentionList attention={attention} today={today} />
+        </Card>
+      )}
       {projects.length === 0 ? (
-        <EmptyState title="No projects yet" action={<LinkButton href="/studio/projects/new">Create your first project</LinkButton>}>
-          A project holds the rooms, sample boards, client decisions and specification of one renovation.
+        <EmptyState
+          title="Set up your studio"
+          action={
+            <>
+              <LinkButton href="/studio/projects/new">Create your first project</LinkButton>
+              <LinkButton href="/studio/library/new" variant="secondary">
+                Add finishes to your library
+              </LinkButton>
+              <LinkButton href="/studio/suppliers" variant="secondary">
+                Add your suppliers and trades
+              </LinkButton>
+            </>
+          }
+        >
+          A project holds the rooms, sample boards, client decisions and specification of one renovation. Add the finishes you use and the
+          suppliers and trades you order from, and every project can draw on them.
         </EmptyState>
       ) : (
         <ul className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">

@@ -4,8 +4,10 @@ import { specLines, specRevisions, supplierAcknowledgements, users } from "@/db/
 import { forbidden } from "@/lib/http";
 import { diffLines, linesForSupplier, type SpecDiff } from "@/lib/spec/diff";
 import { verifyRevision } from "@/lib/spec/revision-content";
+import { noFinishDetail, type LineFinishDetail } from "@/lib/spec/line-detail";
 import { lineStatus, type LineStatus } from "@/lib/spec/status";
 import { getProjectForActor } from "./projects";
+import { readLineFinishDetails, readStudioContact } from "./spec-line-detail";
 import { todayUtc } from "./attention";
 import { openRevision, readAcknowledgements, readIssuerName, readNeighbour, readRevisionLines, type RevisionLine } from "./spec-revisions";
 import type { Actor } from "./users";
@@ -49,7 +51,8 @@ export async function listRevisionsForActor(actor: Actor, projectId: string): Pr
   return supplierId === null ? rows : rows.filter((r) => r.lineCount > 0);
 }
 
-export type ViewLine = RevisionLine & { status: LineStatus };
+/** A line as a screen shows it: the frozen content, order dates, status, and the finish's surface, format and photo. */
+export type ViewLine = RevisionLine & LineFinishDetail & { status: LineStatus };
 
 /** The latest earlier revision this supplier acknowledged: what "changed for you" is measured from. */
 async function readLastAcknowledgedBefore(projectId: string, sequence: number, supplierId: string) {
@@ -86,8 +89,11 @@ export async function getRevisionView(actor: Actor, revisionId: string, today = 
   const allLines = await readRevisionLines(db, revision.id);
   const verified = verifyRevision({ ...revision, lines: allLines });
   const visible = supplierId ? linesForSupplier(allLines, supplierId) : allLines;
+  // Read for the visible lines only: a supplier never learns anything of another supplier's finishes.
+  const details = await readLineFinishDetails(visible.map((l) => l.finishId));
   const lines: ViewLine[] = visible.map((l) => ({
     ...l,
+    ...(details.get(l.finishId ?? "") ?? noFinishDetail),
     status: lineStatus({ orderByDate: l.orderByDate, order: l.order, today, installDate: project.installDate }),
   }));
   const baseline = supplierId
@@ -98,8 +104,9 @@ export async function getRevisionView(actor: Actor, revisionId: string, today = 
     const before = await readRevisionLines(db, baseline.id, supplierId);
     changes = diffLines(before, visible);
   }
-  const [issuedBy, acknowledgements, newer, suppliers] = await Promise.all([
+  const [issuedBy, contact, acknowledgements, newer, suppliers] = await Promise.all([
     readIssuerName(revision.issuedBy),
+    readStudioContact(project.studioId, revision.issuedBy),
     readAcknowledgements(revision.id, supplierId),
     readNeighbour(revision, "after", supplierId),
     supplierId ? Promise.resolve([]) : readSupplierNames(revision.id),
@@ -109,6 +116,7 @@ export async function getRevisionView(actor: Actor, revisionId: string, today = 
     content: scope.kind === "all" ? revision.content : null,
     verified,
     issuedBy,
+    contact,
     project: { id: project.id, name: project.name, siteAddress: project.siteAddress, installDate: project.installDate },
     scope,
     lines,

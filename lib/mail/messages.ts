@@ -2,13 +2,10 @@ import { formatEmailDate, renderEmail, toOneLine } from "./layout";
 import type { EmailContent } from "./layout";
 
 export type { EmailContent } from "./layout";
+export { revisionIssuedMessage, type IssuedLineSummary } from "./revision-issued-message";
 
 export type InvitationRole = "designer" | "client" | "supplier";
 export type VariationStage = "requested" | "priced" | "approved";
-
-function pluralize(count: number, singular: string, plural: string): string {
-  return `${count} ${count === 1 ? singular : plural}`;
-}
 
 export function signInLinkMessage({ url, host }: { url: string; host: string }): EmailContent {
   return renderEmail({
@@ -107,24 +104,6 @@ export function clientChoseMessage(input: {
   });
 }
 
-export function revisionIssuedMessage(input: {
-  url: string;
-  projectName: string;
-  letter: string;
-  supplierName: string;
-  lineCount: number;
-}): EmailContent {
-  return renderEmail({
-    subject: `Revision ${toOneLine(input.letter)} issued for ${toOneLine(input.projectName)}`,
-    heading: `Revision ${input.letter} for ${input.projectName}`,
-    paragraphs: [
-      `Revision ${input.letter} has been issued to ${input.supplierName} with ${pluralize(input.lineCount, "line", "lines")}.`,
-      "Please look it over and acknowledge it once you’ve checked it.",
-    ],
-    action: { label: `Review revision ${input.letter}`, url: input.url },
-  });
-}
-
 export function supplierAcknowledgedMessage(input: {
   url: string;
   projectName: string;
@@ -157,5 +136,22 @@ export function variationMessage(input: {
     heading: `${copy.subject}: ${input.decisionTitle}`,
     paragraphs: [`${copy.sentence} for ${input.decisionTitle} on ${input.projectName}.`],
     action: { label: "Open the variation", url: input.url },
+  });
+}
+
+/**
+ * To an address that already has a Mottle account, when a studio tried to add it to their team:
+ * nothing changed. One address is one account, so they ask for an invitation to another address.
+ */
+export function staffAddressTakenMessage(input: { studioName: string; inviterName: string; signInUrl: string }): EmailContent {
+  return renderEmail({
+    subject: `${toOneLine(input.studioName)} tried to add you to their team on Mottle`,
+    heading: "A studio tried to add you to their team",
+    paragraphs: [
+      `${input.inviterName} at ${input.studioName} tried to add this e-mail address to their studio's team on Mottle. This address already has a Mottle account, so nothing was changed.`,
+      "One e-mail address belongs to one Mottle account. If you want to join their team, ask them to invite you at a different e-mail address.",
+    ],
+    action: { label: "Sign in to Mottle", url: input.signInUrl },
+    footnote: "If you weren’t expecting this, you can ignore this e-mail.",
   });
 }

@@ -1,9 +1,14 @@
 import { stringify } from "csv-stringify/sync";
 import { neutraliseCell } from "@/lib/csv-cell";
 import { cautionTitles } from "./caution-notes";
+import type { LineFinishDetail, StudioContact } from "./line-detail";
 import type { SpecLineContent } from "./types";
 
-export type CsvLine = SpecLineContent & { orderedOn?: string | null; expectedOn?: string | null };
+export type CsvLine = SpecLineContent &
+  Partial<Pick<LineFinishDetail, "surface" | "format">> & { orderedOn?: string | null; expectedOn?: string | null; photoUrl?: string | null };
+
+/** The same on every row (so a filtered or sorted sheet still says where and whom to ask). */
+export type CsvContext = { siteAddress: string | null; installDate: string | null; contact: StudioContact | null };
 
 export const csvHeader = [
   "Revision",
@@ -11,6 +16,8 @@ export const csvHeader = [
   "Item",
   "Location",
   "Finish",
+  "Surface",
+  "Format",
   "Product code",
   "Supplier",
   "Quantity",
@@ -21,6 +28,12 @@ export const csvHeader = [
   "Ordered on",
   "Expected on",
   "Line reference",
+  "Photo",
+  "Site address",
+  "Install date",
+  "Studio contact",
+  "Contact e-mail",
+  "Contact phone",
 ] as const;
 
 function text(value: string | null | undefined): string {
@@ -31,7 +44,15 @@ function text(value: string | null | undefined): string {
  * One revision's lines as CSV: UTF-8 with a byte-order mark (so spreadsheets pick the encoding
  * and "m²" survives), a header row, CRLF line ends as RFC 4180 has them.
  */
-export function specLinesCsv(letter: string, lines: readonly CsvLine[]): string {
+export function specLinesCsv(letter: string, lines: readonly CsvLine[], context?: CsvContext): string {
+  const contact = context?.contact;
+  const shared = [
+    text(context?.siteAddress),
+    context?.installDate ?? "",
+    text(contact ? `${contact.name}, ${contact.studioName}` : null),
+    text(contact?.email),
+    text(contact?.phone),
+  ];
   const rows = [...lines]
     .sort((a, b) => a.sortOrder - b.sortOrder)
     .map((l) => [
@@ -40,6 +61,8 @@ export function specLinesCsv(letter: string, lines: readonly CsvLine[]): string 
       text(l.item),
       text(l.location),
       text(l.finishName),
+      text(l.surface),
+      text(l.format),
       text(l.productCode),
       text(l.supplierName),
       l.quantity,
@@ -50,6 +73,8 @@ export function specLinesCsv(letter: string, lines: readonly CsvLine[]): string 
       l.orderedOn ?? "",
       l.expectedOn ?? "",
       l.lineKey,
+      text(l.photoUrl),
+      ...shared,
     ]);
   return stringify([[...csvHeader], ...rows], { bom: true, record_delimiter: "windows" });
 }

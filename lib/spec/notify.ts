@@ -1,9 +1,11 @@
 import "server-only";
 import { acknowledgeRevision } from "@/db/queries/spec-handoff";
 import { issueRevision } from "@/db/queries/spec-issue";
+import { readLineFinishDetails, readStudioContact } from "@/db/queries/spec-line-detail";
 import type { Actor } from "@/db/queries/users";
 import { revisionIssuedMessage, supplierAcknowledgedMessage } from "@/lib/mail/messages";
 import { appUrl, sendMail } from "@/lib/mail/send";
+import { describeSurfaceFormat, describeWhere, noFinishDetail } from "./line-detail";
 
 /** A mail server being down must not undo a revision that is already issued: log it and carry on. */
 async function trySend(to: string, message: { subject: string; text: string; html: string }): Promise<boolean> {
@@ -20,6 +22,23 @@ async function trySend(to: string, message: { subject: string; text: string; htm
 export async function issueRevisionAndNotify(actor: Actor, projectId: string) {
   const issued = await issueRevision(actor, projectId);
   const url = appUrl(`/supplier/revisions/${issued.revision.id}`);
+  const [details, contact] = await Promise.all([
+    readLineFinishDetails(issued.lines.map((l) => l.finishId)),
+    readStudioContact(issued.project.studioId, actor.userId),
+  ]);
+  // Each supplier's e-mail lists their own lines only, with what they need to act on them.
+  const linesFor = (supplierId: string) =>
+    issued.lines
+      .filter((l) => l.supplierId === supplierId)
+      .map((l) => ({
+        where: describeWhere(l),
+        item: l.item,
+        finishName: l.finishName,
+        surfaceFormat: describeSurfaceFormat(details.get(l.finishId ?? "") ?? noFinishDetail),
+        productCode: l.productCode,
+        quantity: `${l.quantity} ${l.unit}`,
+        orderByDate: l.orderByDate,
+      }));
   const sends = issued.recipients.flatMap((r) =>
     r.emails.map(async (to) => ({
       supplierId: r.supplierId,
@@ -32,6 +51,10 @@ export async function issueRevisionAndNotify(actor: Actor, projectId: string) {
           letter: issued.revision.letter,
           supplierName: r.supplierName,
           lineCount: r.lineCount,
+          siteAddress: issued.project.siteAddress,
+          installDate: issued.project.installDate,
+          contact,
+          lines: linesFor(r.supplierId),
         }),
       ),
     })),

@@ -1,4 +1,5 @@
 import type { SpecDiff } from "./diff";
+import type { LineFinishDetail, StudioContact } from "./line-detail";
 import type { LineStatus } from "./status";
 import type { SpecLineContent } from "./types";
 
@@ -11,11 +12,14 @@ export type RevisionJson = {
   sha256: string;
   verified: boolean;
   issuedBy: string;
+  /** Who at the studio answers questions about this revision (lib/spec/line-detail.ts). */
+  contact: StudioContact | null;
   project: { id: string; name: string; siteAddress: string | null; installDate: string | null };
   scope: { kind: "all" } | { kind: "supplier"; supplierId: string };
   /** The canonical text the hash is of: staff only (it holds every supplier's lines). */
   content: string | null;
-  lines: (SpecLineContent & { id: string; order: { orderedOn: string | null; expectedOn: string | null } | null; status: LineStatus })[];
+  lines: (SpecLineContent &
+    LineFinishDetail & { id: string; order: { orderedOn: string | null; expectedOn: string | null } | null; status: LineStatus })[];
   acknowledgements: { supplierId: string; acknowledgedAt: string; byName: string | null; byEmail: string }[];
   changes: (SpecDiff & { since: { id: string; letter: string } }) | null;
   newer: { id: string; letter: string } | null;
@@ -26,6 +30,7 @@ type View = {
   revision: { id: string; letter: string; sequence: number; issuedAt: Date; sha256: string };
   verified: boolean;
   issuedBy: string;
+  contact: StudioContact | null;
   project: RevisionJson["project"];
   scope: RevisionJson["scope"];
   content: string | null;
@@ -43,6 +48,7 @@ export function toRevisionJson(view: View): RevisionJson {
     issuedAt: view.revision.issuedAt.toISOString(),
     verified: view.verified,
     issuedBy: view.issuedBy,
+    contact: view.contact,
     project: view.project,
     scope: view.scope,
     content: view.content,

@@ -1,30 +1,35 @@
 import { Badge, Figure } from "@/components/ui";
 import { formatDay } from "@/lib/format";
 import { quantityDigits } from "@/lib/spec/group";
+import { describeSurfaceFormat, describeWhere } from "@/lib/spec/line-detail";
 import type { RevisionJson } from "@/lib/spec/revision-json";
 import { LineCautions } from "../line-cautions";
 import { LineStatusBadge } from "../line-status";
+import { LinePhoto } from "./line-photo";
 import { OrderDatesForm } from "./order-dates-form";
 
 type Line = RevisionJson["lines"][number];
 
-/** One line for a supplier, as a card: what, where, how many, by when, and their order dates. */
+/** One line for a supplier, as a card: what, where, which finish (surface, format, photo), how many, by when, and their order dates. */
 type Props = { revisionId: string; line: Line; canRecord: boolean; whyNot: string; change: { kind: "added" | "changed"; since: string } | null };
 
 export function SupplierLineCard({ revisionId, line, canRecord, whyNot, change }: Props) {
+  const surfaceFormat = describeSurfaceFormat(line);
   return (
     <li className="flex flex-col gap-3 rounded-lg border border-line bg-card p-4 shadow-card" data-late={line.status === "order-overdue" || line.status === "arrives-late" || undefined}>
-      <div className="flex flex-col items-start gap-0.5">
-        {change && <Badge tone={change.kind === "added" ? "ok" : "caution"}>{change.kind === "added" ? "New" : "Changed"} since revision {change.since}</Badge>}
-        <h3 className="text-lg font-semibold">{line.item}</h3>
-        <p className="text-ink-soft">
-          {line.room}
-          {line.location && line.location !== line.room ? ` · ${line.location}` : ""}
-        </p>
+      <div className="flex items-start justify-between gap-3">
+        <div className="flex flex-col items-start gap-0.5">
+          {change && <Badge tone={change.kind === "added" ? "ok" : "caution"}>{change.kind === "added" ? "New" : "Changed"} since revision {change.since}</Badge>}
+          <h3 className="text-lg font-semibold">{line.item}</h3>
+          <p className="text-ink-soft">{describeWhere(line)}</p>
+        </div>
+        {line.photo && <LinePhoto photo={line.photo} finishName={line.finishName} />}
       </div>
       <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1">
         <dt className="text-ink-soft">Finish</dt>
         <dd>{line.finishName}</dd>
+        <dt className="text-ink-soft">Surface, format</dt>
+        <dd>{surfaceFormat ?? "not given"}</dd>
         <dt className="text-ink-soft">Product code</dt>
         <dd className="figures">{line.productCode ?? "none given"}</dd>
         <dt className="text-ink-soft">Quantity</dt>

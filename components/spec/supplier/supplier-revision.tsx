@@ -10,6 +10,7 @@ import { CautionNotes } from "../caution-notes";
 import { DiffList } from "../diff-list";
 import { AcknowledgePanel } from "./acknowledge-panel";
 import { fetchRevision, revisionKey } from "./api";
+import { RevisionFacts } from "./revision-facts";
 import { SupplierLineCard } from "./supplier-line-card";
 
 function changeOf(rev: RevisionJson, lineKey: string) {
@@ -42,6 +43,9 @@ export function SupplierRevision({ initial }: { initial: RevisionJson }) {
           Order from the latest revision. <Link href={`/supplier/revisions/${rev.newer.id}`}>Open revision {rev.newer.letter}</Link>
         </Notice>
       )}
+      <Card>
+        <RevisionFacts project={rev.project} contact={rev.contact} />
+      </Card>
       <Card>
         <AcknowledgePanel revisionId={rev.id} letter={rev.letter} acknowledgedAt={ack?.acknowledgedAt ?? null} byName={ack?.byName ?? null} replaced={Boolean(rev.newer)} />
       </Card>

@@ -25,8 +25,19 @@ export default async function HandoffPage({ params }: Props) {
         actions={view.latest ? <LinkButton href={`${specHref}/revisions/${view.latest.id}`} variant="secondary">Open revision {view.latest.letter}</LinkButton> : null}
       />
       {!view.latest ? (
-        <EmptyState title="Nothing issued yet" action={<LinkButton href={specHref}>Go to the specification</LinkButton>}>
-          Suppliers are handed their lines when you issue a revision of the specification.
+        <EmptyState
+          title="Nothing issued yet"
+          action={
+            <>
+              <LinkButton href={specHref}>Go to the specification</LinkButton>
+              <LinkButton href="/studio/suppliers" variant="secondary">
+                Add the suppliers and trades you order from
+              </LinkButton>
+            </>
+          }
+        >
+          Suppliers are handed their lines when you issue a revision of the specification. Give each supplier a contact on this project so the
+          revision reaches them.
         </EmptyState>
       ) : (
         <>

@@ -76,7 +76,23 @@ export default async function SpecificationPage({ params, searchParams }: Props)
         <ViewSwitch basePath={base} current={grouping} />
       </div>
       {spec.lines.length === 0 && spec.pending.length === 0 ? (
-        <EmptyState title="Nothing in the specification yet">Lock a decision with the client, or add a fixed item below.</EmptyState>
+        <EmptyState
+          title="Nothing in the specification yet"
+          action={
+            <>
+              <LinkButton href={`/studio/projects/${spec.project.id}/decisions`}>Go to the decisions</LinkButton>
+              <LinkButton href={`${base}/fixed-items/new`} variant="secondary">
+                Add a fixed item
+              </LinkButton>
+              <LinkButton href="/studio/suppliers" variant="secondary">
+                Add the suppliers and trades you order from
+              </LinkButton>
+            </>
+          }
+        >
+          Lines arrive here when a client approves a decision, or when you add a fixed item such as an appliance. Each line goes to the supplier of
+          its finish, so give your finishes a supplier.
+        </EmptyState>
       ) : (
         <SpecGroups lines={spec.lines} pending={spec.pending} grouping={grouping} cautionNumbers={numbers} />
       )}
