@@ -69,6 +69,8 @@ export const optionLines = sqliteTable(
       .references(() => finishes.id, { onDelete: "restrict" }),
     quantity: real("quantity").notNull(),
     unit: text("unit").notNull(),
+    /** What the line is, as the trades name it ("Benchtop", "Splashback"); the decision's title when empty. */
+    item: text("item"),
     location: text("location"),
     sortOrder: integer("sort_order").notNull().default(0),
   },

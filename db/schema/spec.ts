@@ -108,3 +108,20 @@ export const supplierAcknowledgements = sqliteTable(
   (t) => [uniqueIndex("supplier_ack_unique").on(t.revisionId, t.supplierId)],
 );
 export type SupplierAcknowledgement = typeof supplierAcknowledgements.$inferSelect;
+
+/**
+ * A designer's word that an issued line still stands although an approved variation changed the
+ * decision it came from: the supplier may order it again without waiting for the next revision.
+ */
+export const lineConfirmations = sqliteTable(
+  "line_confirmation",
+  {
+    lineId: text("line_id")
+      .primaryKey()
+      .references(() => specLines.id, { onDelete: "cascade" }),
+    confirmedBy: text("confirmed_by").references(() => users.id, { onDelete: "set null" }),
+    note: text("note"),
+    confirmedAt: createdAt(),
+  },
+);
+export type LineConfirmation = typeof lineConfirmations.$inferSelect;

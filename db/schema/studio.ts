@@ -11,6 +11,11 @@ export const studios = sqliteTable("studio", {
   markupBasisPoints: integer("markup_basis_points").notNull().default(0),
   /** Sales tax on the client's price, in basis points: GST 10 % = 1000 by default. Prices shown to clients include it. */
   taxBasisPoints: integer("tax_basis_points").notNull().default(1000),
+  /**
+   * Which access rule the low-vision contrast check follows: AS 1428.1 luminance contrast (30 %),
+   * BS 8300-2 LRV difference (30 points), or both. Named in every verdict.
+   */
+  accessStandard: text("access_standard", { enum: ["as1428", "bs8300", "both"] }).notNull().default("as1428"),
   createdAt: createdAt(),
 });
 export type Studio = typeof studios.$inferSelect;
