@@ -3,7 +3,7 @@ import type { FieldErrors } from "@/lib/http";
 import { centsToInput, parseMoney } from "@/lib/pricing/parse-amount";
 
 /** What the designer's form holds: text as typed, turned into the API body on submit. */
-export type LineDraft = { key: string; finishId: string; quantity: string; unit: string; location: string };
+export type LineDraft = { key: string; finishId: string; quantity: string; unit: string; item: string; location: string };
 export type OptionDraft = {
   key: string;
   id?: string;
@@ -19,7 +19,7 @@ export type DecisionDraft = { room: string; title: string; allowance: string; du
 
 const newKey = () => Math.random().toString(36).slice(2);
 
-export const emptyLine = (): LineDraft => ({ key: newKey(), finishId: "", quantity: "1", unit: "", location: "" });
+export const emptyLine = (): LineDraft => ({ key: newKey(), finishId: "", quantity: "1", unit: "", item: "", location: "" });
 export const emptyOption = (): OptionDraft => ({ key: newKey(), label: "", priceSetByHand: false, price: "", notes: "", boardId: "", lines: [emptyLine()] });
 
 export function emptyDraft(roomId: string): DecisionDraft {
@@ -41,7 +41,7 @@ export function draftFromView(view: DecisionView): DecisionDraft {
       price: centsToInput(o.priceCents),
       notes: o.notes ?? "",
       boardId: o.boardId ?? "",
-      lines: o.lines.map((l) => ({ key: l.id, finishId: l.finishId, quantity: String(l.quantity), unit: l.unit, location: l.location ?? "" })),
+      lines: o.lines.map((l) => ({ key: l.id, finishId: l.finishId, quantity: String(l.quantity), unit: l.unit, item: l.item ?? "", location: l.location ?? "" })),
     })),
   };
 }
@@ -72,7 +72,7 @@ export function draftToBody(draft: DecisionDraft): { body: Record<string, unknow
       ...price,
       notes: o.notes || null,
       boardId: o.boardId || null,
-      lines: o.lines.map((l) => ({ finishId: l.finishId, quantity: readQuantity(l.quantity), unit: l.unit, location: l.location || null })),
+      lines: o.lines.map((l) => ({ finishId: l.finishId, quantity: readQuantity(l.quantity), unit: l.unit, item: l.item || null, location: l.location || null })),
     };
   });
   return { body: { room: draft.room, title: draft.title, allowanceCents: allowance.ok ? allowance.value : null, dueDate: draft.dueDate, notify: draft.notify, options }, errors };

@@ -59,7 +59,7 @@ export function OptionFields({ option, index, finishes, rates, boards, errors, c
           const finish = finishes.find((f) => f.id === line.finishId);
           const lp = `${path}.lines.${j}`;
           return (
-            <div key={line.key} className="grid items-end gap-3 rounded-md bg-stone-50 p-3 sm:grid-cols-[auto_3fr_1fr_1fr_2fr_auto]">
+            <div key={line.key} className="grid items-end gap-3 rounded-md bg-stone-50 p-3 sm:grid-cols-[auto_3fr_1fr_1fr_2fr_2fr_auto]">
               <div className="hidden sm:block">{finish ? <Swatch hex={finish.hex} name={finish.name} size="sm" caption={false} /> : <div className="size-[76px]" />}</div>
               <Field label="Finish" htmlFor={id(`finish-${j}`)} error={errors?.[`${lp}.finishId`]}>
                 <Select
@@ -90,6 +90,9 @@ export function OptionFields({ option, index, finishes, rates, boards, errors, c
               <Field label="Unit" htmlFor={id(`unit-${j}`)} error={errors?.[`${lp}.unit`]}>
                 <Input id={id(`unit-${j}`)} value={line.unit} onChange={(e) => setLine(j, { unit: e.target.value })} invalid={Boolean(errors?.[`${lp}.unit`])} />
               </Field>
+              <Field label="Item" htmlFor={id(`item-${j}`)} optional>
+                <Input id={id(`item-${j}`)} value={line.item} onChange={(e) => setLine(j, { item: e.target.value })} placeholder="Benchtop, splashback…" />
+              </Field>
               <Field label="Where" htmlFor={id(`loc-${j}`)} optional>
                 <Input id={id(`loc-${j}`)} value={line.location} onChange={(e) => setLine(j, { location: e.target.value })} placeholder="Island, perimeter…" />
               </Field>
@@ -97,7 +100,7 @@ export function OptionFields({ option, index, finishes, rates, boards, errors, c
                 Remove
               </Button>
               {finish && (
-                <p className="text-sm text-ink-soft sm:col-span-6">
+                <p className="text-sm text-ink-soft sm:col-span-7">
                   <Money cents={finish.unitPriceCents} /> per {finish.unit}, excluding tax · lead time {finish.leadTimeDays} days{finish.supplierName ? ` · ${finish.supplierName}` : ""}
                 </p>
               )}

@@ -87,6 +87,6 @@ export async function insertOption(tx: Tx, decisionId: string, o: NewOption, sor
 
 export async function insertLines(tx: Tx, optionId: string, lines: NewOption["lines"]) {
   await tx.insert(optionLines).values(
-    lines.map((l, j) => ({ optionId, finishId: l.finishId, quantity: l.quantity, unit: l.unit, location: l.location, sortOrder: j })),
+    lines.map((l, j) => ({ optionId, finishId: l.finishId, quantity: l.quantity, unit: l.unit, item: l.item ?? null, location: l.location, sortOrder: j })),
   );
 }

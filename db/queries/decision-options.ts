@@ -64,6 +64,7 @@ export async function loadOptionViews(
         lrvSource: finish.lrvSource,
         quantity: line.quantity,
         unit: line.unit,
+        item: line.item,
         location: line.location,
         leadTimeDays: finish.leadTimeDays,
         supplierName,

@@ -49,6 +49,7 @@ async function readDecisionSources(reader: Reader, projectId: string): Promise<L
       roomName: rooms.name,
       roomOrder: rooms.sortOrder,
       location: optionLines.location,
+      lineItem: optionLines.item,
       quantity: optionLines.quantity,
       unit: optionLines.unit,
       ...finishColumns,
@@ -69,7 +70,8 @@ async function readDecisionSources(reader: Reader, projectId: string): Promise<L
       sourceId: r.decisionId,
       position,
       room: { name: r.roomName, sortOrder: r.roomOrder },
-      item: r.title,
+      // Named for the item where the designer named it; older lines keep the decision's title (so issued revisions still verify).
+      item: r.lineItem ?? r.title,
       location: r.location,
       finish: finishOf(r),
       quantity: r.quantity,

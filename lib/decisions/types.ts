@@ -20,6 +20,8 @@ export type LineView = {
   lrvSource: "published" | "photo" | "computed";
   quantity: number;
   unit: string;
+  /** What the line is, when the designer named it; the decision's title stands in otherwise. */
+  item: string | null;
   location: string | null;
   leadTimeDays: number;
   supplierName: string | null;

@@ -24,6 +24,8 @@ export const optionLineSchema = z.object({
     .positive("The quantity must be more than zero.")
     .max(100_000, "The quantity looks too large."),
   unit: z.string({ error: "Enter a unit." }).trim().min(1, "Enter a unit.").max(20, "Keep the unit short."),
+  /** What the line is as the trades name it ("Benchtop", "Splashback"); the decision's title when empty. */
+  item: optionalText(80),
   location: optionalText(80),
 });
 

@@ -124,6 +124,29 @@ describe("sign-in links and every e-mailed link use the configured origin", () =
     expect([chose, varied].every(onOurOrigin)).toBe(true);
   });
 
+  it("server-action forms posted with X-Forwarded-Host (a project invitation, a team invitation) e-mail links to us", async () => {
+    const context = await browser.newContext({ baseURL: baseUrl, extraHTTPHeaders: { "x-forwarded-host": EVIL, "x-forwarded-proto": "https" } });
+    const page = await context.newPage();
+    await signInWithPassword(page, "owner@demo.example");
+    await page.waitForURL(/\/studio/);
+    const since = Date.now() - 1000;
+    const client = `forged-${Date.now().toString(36)}@homeowner.example`;
+    await page.goto("/studio/projects/demo-project-marrow");
+    await page.getByLabel("They are").selectOption({ label: "A client (homeowner)" });
+    await page.locator("#invite-name").fill("Forged Host");
+    await page.locator("#invite-email").fill(client);
+    await page.getByRole("button", { name: "Send invitation" }).click();
+    await page.getByText("Invitation sent.").first().waitFor();
+    const designer = `forged-${Date.now().toString(36)}@studio.example`;
+    await page.goto("/studio/team");
+    await page.getByLabel("Name").fill("Forged Host");
+    await page.getByLabel("E-mail address").fill(designer);
+    await page.getByRole("button", { name: "Send invitation" }).click();
+    await page.getByText(/Invitation sent/).first().waitFor();
+    for (const to of [client, designer]) expect(onOurOrigin(await waitForMailLink(to, since, (l) => /^https?:/.test(l)))).toBe(true);
+    await context.close();
+  }, 60_000);
+
   it("no e-mail caught during these attacks links anywhere but our origin", async () => {
     const messages = (await (await fetch(`${baseUrl}/api/dev/mail`)).json()) as { links: string[] }[];
     const links = messages.flatMap((m) => m.links).filter((l) => /^https?:/.test(l));
