@@ -29,7 +29,16 @@ export function AppShell({ nav, who, children }: { nav: NavItem[]; who: string; 
             </ul>
           </nav>
           <div className="ml-auto flex items-center gap-3">
-            <span className="hidden text-sm text-ink-soft sm:inline">{who}</span>
+            <Link
+              href="/account"
+              className="inline-flex min-h-11 items-center rounded-md px-2 text-sm text-ink-soft underline-offset-4 hover:underline"
+            >
+              <span className="sm:hidden">Your account</span>
+              <span className="hidden sm:inline">
+                <span className="sr-only">Your account: </span>
+                {who}
+              </span>
+            </Link>
             <form action={signOutAction}>
               <button
                 type="submit"

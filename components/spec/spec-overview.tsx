@@ -35,7 +35,7 @@ export function SpecOverview({ lineCount, pendingCount, lateCount, installDate, 
           <Count value={lateCount} label="late" tone={lateCount ? "problem" : undefined} />
         </div>
         <p className="mt-4 text-ink-soft">
-          {installDate ? `Install ${formatDay(installDate)}: order-by dates count back from it by each finish's lead time.` : "Set the project's install date to work out order-by dates."}
+          {installDate ? `Install ${formatDay(installDate)}: order-by dates count back from it by each finish's lead time.` : "Set the install date under Edit project, on the project's page, to work out order-by dates."}
         </p>
         {lateCount > 0 && (
           <div className="mt-4">

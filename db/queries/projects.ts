@@ -63,6 +63,8 @@ export async function listProjectPeople(projectId: string): Promise<ProjectPerso
     db
       .select({
         id: projectMembers.id,
+        userId: projectMembers.userId,
+        supplierId: projectMembers.supplierId,
         name: projectMembers.displayName,
         email: users.email,
         role: projectMembers.role,
@@ -87,13 +89,16 @@ export async function listProjectPeople(projectId: string): Promise<ProjectPerso
   ]);
   const people: ProjectPerson[] = [
     ...members.map((m) => ({ ...m, name: m.name ?? m.email, joined: Boolean(m.joined) })),
-    ...invitations.map((i) => ({ ...i, name: i.name ?? i.email, joined: false })),
+    ...invitations.map((i) => ({ ...i, userId: null, supplierId: null, name: i.name ?? i.email, joined: false })),
   ];
   return people.sort((a, b) => a.role.localeCompare(b.role) || a.name.localeCompare(b.name));
 }
 
 export type ProjectPerson = {
   id: string;
+  /** Set for members (who can be moved or removed); null for an invitation not yet accepted. */
+  userId: string | null;
+  supplierId: string | null;
   name: string;
   email: string;
   role: "client" | "supplier";

@@ -7,7 +7,8 @@ export const email = z
   .max(254, "That e-mail address is too long.")
   .pipe(z.email({ error: "Enter a valid e-mail address, like name@example.com." }));
 
-const password = z
+/** The rule for every password a person chooses (sign-up, setting or changing one). */
+export const newPassword = z
   .string({ error: "Enter a password." })
   .min(10, "Use at least 10 characters.")
   .max(200, "Use at most 200 characters.");
@@ -25,7 +26,7 @@ export const signUpSchema = z.object({
   studioName: z.string().trim().min(2, "Enter your studio's name.").max(120, "Use at most 120 characters."),
   name: personName,
   email,
-  password,
+  password: newPassword,
 });
 export type SignUpInput = z.infer<typeof signUpSchema>;
 

@@ -22,3 +22,24 @@ export const createProjectSchema = z.object({
     .pipe(z.array(z.string().max(60, "Keep each room name under 60 characters.")).max(20, "At most 20 rooms.")),
 });
 export type CreateProjectInput = z.infer<typeof createProjectSchema>;
+
+const projectName = z.string({ error: "Enter the project's name." }).trim().min(2, "Enter the project's name.").max(120, "Use at most 120 characters.");
+
+/**
+ * A change to a project: any of its name, site address and install date. An empty address or
+ * date (or null) clears it. At least one of the three must be sent.
+ */
+export const editProjectSchema = z
+  .object({
+    name: projectName.optional(),
+    siteAddress: z.string({ error: "Enter the site address as text." }).trim().max(200, "Use at most 200 characters.").nullable().optional(),
+    installDate: isoDay.or(z.literal("")).nullable().optional(),
+  })
+  .strict()
+  .refine((v) => v.name !== undefined || v.siteAddress !== undefined || v.installDate !== undefined, "Send at least one of name, siteAddress or installDate.")
+  .transform((v) => ({
+    name: v.name,
+    siteAddress: v.siteAddress === undefined ? undefined : v.siteAddress || null,
+    installDate: v.installDate === undefined ? undefined : v.installDate || null,
+  }));
+export type EditProjectInput = z.infer<typeof editProjectSchema>;

@@ -29,6 +29,7 @@ const EXPECTED: Record<string, { args: unknown[]; form?: Record<string, string>;
   "lib/actions/sign-out.ts#signOutAction": { args: [], expect: anyone },
   "app/studio/projects/new/actions.ts#createProjectAction": { args: [], expect: studioStaff },
   "app/studio/team/actions.ts#inviteDesignerAction": { args: [], expect: ownersOnly },
+  "app/studio/settings/actions.ts#saveStudioSettingsAction": { args: [], expect: ownersOnly },
   "app/studio/projects/[projectId]/actions.ts#inviteToProjectAction": { args: [], form: { projectId: project }, expect: projectStaff },
   // Anyone signed in may answer an invitation; an empty form (no invitation) fails validation.
   "app/welcome/actions.ts#answerInvitationAction": { args: [], expect: { ...anyone, anonymous: 401 } },
@@ -46,6 +47,22 @@ const EXPECTED: Record<string, { args: unknown[]; form?: Record<string, string>;
   "app/studio/suppliers/actions.ts#saveSupplierAction": { args: [], expect: studioStaff },
   "app/studio/suppliers/actions.ts#archiveSupplierAction": { args: [], form: { supplierId: "demo-supplier-stone", archived: "0" }, expect: projectStaff },
   "app/studio/suppliers/actions.ts#deleteSupplierAction": { args: [], form: { supplierId: "demo-supplier-stone" }, expect: projectStaff },
+  // Corrections: an empty form fails validation; removals use ids whose removal is refused (409),
+  // except removing a member, which the owner really does, so the designer then finds them gone.
+  "app/studio/projects/[projectId]/actions.ts#editProjectAction": { args: [], form: { projectId: project }, expect: projectStaff },
+  "app/studio/projects/[projectId]/room-actions.ts#addRoomAction": { args: [], form: { projectId: project }, expect: projectStaff },
+  "app/studio/projects/[projectId]/room-actions.ts#roomAction": { args: [], form: { projectId: project, roomId: "demo-room-kitchen", intent: "remove" }, expect: projectStaff },
+  "app/studio/projects/[projectId]/member-actions.ts#changeMemberRoleAction": { args: [], form: { projectId: project, userId: "demo-user-client2" }, expect: projectStaff },
+  "app/studio/projects/[projectId]/member-actions.ts#removeMemberAction": {
+    args: [],
+    form: { projectId: project, userId: "demo-user-joinery" },
+    expect: { ...projectStaff, designer: 404 },
+  },
+  "app/studio/projects/[projectId]/member-actions.ts#withdrawInvitationAction": { args: [], form: { projectId: project, entryId: "demo-member-client" }, expect: projectStaff },
+  "app/studio/team/staff-actions.ts#changeStaffRoleAction": { args: [], form: { userId: "demo-user-designer" }, expect: { ...ownersOnly, other: 404 } },
+  "app/studio/team/staff-actions.ts#removeStaffAction": { args: [], form: { userId: "demo-user-owner" }, expect: { ...ownersOnly, other: 404 } },
+  "app/account/actions.ts#saveProfileAction": { args: [], expect: { ...anyone, anonymous: 401 } },
+  "app/account/actions.ts#setPasswordAction": { args: [], expect: { ...anyone, anonymous: 401 } },
 };
 
 type Action = (...args: unknown[]) => Promise<ActionResult<unknown> | undefined>;

@@ -18,6 +18,7 @@ export const FIXTURES: Record<string, string> = {
   finishId: "demo-finish-saltbush",
   variationId: "demo-variation-kb",
   lineId: "demo-spec-line-a-5",
+  supplierId: "demo-supplier-stone",
   nextauth: "session",
 };
 
@@ -65,6 +66,7 @@ export const expectations: Record<string, Expectation> = {
   "GET /welcome": { path: "/welcome", expect: as(all("ok"), { anonymous: "sign-in" }) },
   "GET /studio": { path: "/studio", expect: studioPage },
   "GET /studio/team": { path: "/studio/team", expect: studioPage },
+  "GET /studio/settings": { path: "/studio/settings", expect: studioPage },
   "GET /studio/projects/new": { path: "/studio/projects/new", expect: studioPage },
   "GET /studio/projects/[projectId]": { path: "/studio/projects/demo-project-marrow", expect: projectPage },
   "GET /client": { path: "/client", expect: clientPage },
@@ -80,6 +82,9 @@ export const expectations: Record<string, Expectation> = {
   "GET /studio/library/new": { path: "/studio/library/new", expect: studioPage },
   "GET /studio/library/import": { path: "/studio/library/import", expect: studioPage },
   "GET /studio/library/[finishId]": { path: "/studio/library/demo-finish-saltbush", expect: projectPage },
+  "GET /studio/suppliers": { path: "/studio/suppliers", expect: studioPage },
+  "GET /studio/suppliers/new": { path: "/studio/suppliers/new", expect: studioPage },
+  "GET /studio/suppliers/[supplierId]": { path: "/studio/suppliers/demo-supplier-stone", expect: projectPage },
   "GET /studio/library/[finishId]/edit": { path: "/studio/library/demo-finish-saltbush/edit", expect: projectPage },
   "GET /studio/projects/[projectId]/activity": { path: "/studio/projects/demo-project-marrow/activity", expect: projectPage },
   "GET /studio/projects/[projectId]/boards": { path: "/studio/projects/demo-project-marrow/boards", expect: projectPage },
@@ -126,6 +131,10 @@ export const expectations: Record<string, Expectation> = {
   "POST /api/decisions/[decisionId]/variations/[variationId]/approve": { path: "/api/decisions/demo-decision-kitchen-benchtop/variations/no-such-variation/approve", expect: { ...clientWrite, client: 404 } },
   "POST /api/decisions/[decisionId]/variations/[variationId]/decline": { path: "/api/decisions/demo-decision-kitchen-benchtop/variations/no-such-variation/decline", expect: { ...clientWrite, client: 404 } },
   "POST /api/decisions/[decisionId]/variations/[variationId]/withdraw": { path: "/api/decisions/demo-decision-kitchen-benchtop/variations/no-such-variation/withdraw", expect: { ...clientWrite, client: 404, owner: 404, designer: 404, other: 404 } },
+  // Each studio's staff read their own studio's markup and tax; only an owner changes them (the
+  // other studio's owner gets 400 for the empty body, for their own studio).
+  "GET /api/studio/settings": { path: "/api/studio/settings", expect: libraryList },
+  "PATCH /api/studio/settings": { path: "/api/studio/settings", expect: { ...libraryList, owner: 400, designer: 403, other: 400 } },
   "GET /api/finishes": { path: "/api/finishes?category=stone", expect: libraryList },
   "POST /api/finishes": { path: "/api/finishes", expect: libraryWrite },
   "GET /api/finishes/[finishId]": { path: "/api/finishes/demo-finish-saltbush", expect: libraryItem },
@@ -137,6 +146,14 @@ export const expectations: Record<string, Expectation> = {
   "GET /api/finishes/export": { path: "/api/finishes/export", expect: libraryList },
   // CSV only: the matrix's empty JSON body is the wrong type (415) for the people allowed to import.
   "POST /api/finishes/import": { path: "/api/finishes/import", expect: { ...libraryWrite, owner: 415, designer: 415, other: 415 } },
+  // The studio's directory: each studio's staff see their own; our supplier ids are 404 to another studio.
+  "GET /api/suppliers": { path: "/api/suppliers?archived=1", expect: libraryList },
+  "POST /api/suppliers": { path: "/api/suppliers", expect: libraryWrite },
+  "GET /api/suppliers/[supplierId]": { path: "/api/suppliers/demo-supplier-stone", expect: libraryItem },
+  // An empty change is a valid change of nothing.
+  "PATCH /api/suppliers/[supplierId]": { path: "/api/suppliers/demo-supplier-stone", expect: { ...libraryItemWrite, owner: 200, designer: 200 } },
+  // The stonemason has finishes and lines in an issued specification, so it can only be archived.
+  "DELETE /api/suppliers/[supplierId]": { path: "/api/suppliers/demo-supplier-stone", expect: { ...libraryItemWrite, owner: 409, designer: 409 } },
   "POST /api/uploads": { path: "/api/uploads", expect: libraryWrite },
   // Files answer 404 alike for "no such file" and "not yours", so ids can't be probed.
   "GET /api/uploads/[imageId]/[variant]": { path: "/api/uploads/no-such-image/400", expect: as(all(404), { anonymous: 401 }) },
@@ -158,6 +175,22 @@ export const expectations: Record<string, Expectation> = {
   "PATCH /api/revisions/[revisionId]/lines/[lineId]": { path: "/api/revisions/demo-revision-a/lines/demo-spec-line-a-5", expect: { ...staffRead, owner: 403, designer: 403, other: 403, stone: 200, joinery: 404 } },
   "PUT /api/revisions/[revisionId]/lines/[lineId]": { path: "/api/revisions/demo-revision-a/lines/demo-spec-line-a-5", expect: all(405) },
   "DELETE /api/revisions/[revisionId]/lines/[lineId]": { path: "/api/revisions/demo-revision-a/lines/demo-spec-line-a-5", expect: all(405) },
+  // Corrections (project, rooms, people, staff, your own account). Removals are tried where they
+  // are refused for everyone, so the seeded demo the other rows rely on stays as it was.
+  "GET /account": { path: "/account", expect: as(all("ok"), { anonymous: "sign-in" }) },
+  "PATCH /api/me": { path: "/api/me", expect: as(all(400), { anonymous: 401 }) },
+  "PATCH /api/projects/[projectId]": { path: "/api/projects/demo-project-marrow", expect: staffWrite },
+  "POST /api/projects/[projectId]/rooms": { path: "/api/projects/demo-project-marrow/rooms", expect: staffWrite },
+  "PATCH /api/projects/[projectId]/rooms/[roomId]": { path: "/api/projects/demo-project-marrow/rooms/demo-room-kitchen", expect: staffWrite },
+  // The kitchen has boards and decisions: 409 for staff, nothing removed.
+  "DELETE /api/projects/[projectId]/rooms/[roomId]": { path: "/api/projects/demo-project-marrow/rooms/demo-room-kitchen", expect: { ...staffWrite, owner: 409, designer: 409 } },
+  "PATCH /api/projects/[projectId]/members/[userId]": { path: "/api/projects/demo-project-marrow/members/demo-user-client2", expect: staffWrite },
+  // Another project's client is not on this one: 404 for staff, nobody removed.
+  "DELETE /api/projects/[projectId]/members/[userId]": { path: "/api/projects/demo-project-marrow/members/demo-user-otherclient", expect: { ...staffWrite, owner: 404, designer: 404 } },
+  // Owners only; the other studio's owner finds nobody of ours (404).
+  "PATCH /api/studio/staff/[userId]": { path: "/api/studio/staff/demo-user-designer", expect: { ...staffRead, owner: 400, designer: 403 } },
+  // The demo studio's only owner: never removed (409).
+  "DELETE /api/studio/staff/[userId]": { path: "/api/studio/staff/demo-user-owner", expect: { ...staffRead, owner: 409, designer: 403 } },
   // Without Auth.js's CSRF token a sign-out is refused with a redirect to the error page.
   "POST /api/auth/[...nextauth]": { path: "/api/auth/signout", expect: all(302) },
 };

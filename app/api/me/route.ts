@@ -1,7 +1,9 @@
 import { NextResponse } from "next/server";
+import { updateProfile } from "@/db/queries/account";
 import { homePathFor } from "@/db/queries/users";
 import { requireApiUser } from "@/lib/auth/session";
-import { route } from "@/lib/http";
+import { readJson, route } from "@/lib/http";
+import { profileSchema } from "@/lib/validation/account";
 
 /** The signed-in person and their roles; 401 when signed out. */
 export const GET = route(async () => {
@@ -19,4 +21,11 @@ export const GET = route(async () => {
     projects: actor.projects.map(({ projectId, role, supplierId }) => ({ projectId, role, supplierId })),
     home: homePathFor(actor),
   });
+});
+
+/** The person's own name and phone: `{ name?, phone? }` (an empty or null phone clears it). */
+export const PATCH = route(async (request: Request) => {
+  const actor = await requireApiUser();
+  const input = profileSchema.parse(await readJson(request));
+  return NextResponse.json(await updateProfile(actor, input));
 });

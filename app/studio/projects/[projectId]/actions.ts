@@ -1,12 +1,14 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
+import { updateProject } from "@/db/queries/project-edits";
 import { inviteToProject } from "@/db/queries/project-invite";
 import { getProjectForStaff } from "@/db/queries/projects";
 import { readFormId } from "@/lib/actions/form-ids";
 import { failure, formValues, keptValues, type ActionResult } from "@/lib/actions/result";
 import { requireApiUser } from "@/lib/auth/session";
 import { emailInvitation } from "@/lib/invitations/email-invitation";
+import { editProjectSchema } from "@/lib/validation/project";
 import { inviteeFromForm, projectInviteeSchema } from "@/lib/validation/project-invite";
 
 /** The form's state: the outcome (with what was typed, after a refusal) and a count of sends. */
@@ -45,4 +47,20 @@ function onFormFields(errors: Record<string, string[]> | undefined) {
   const { role, supplierId, ...rest } = errors;
   const who = [...(role ?? []), ...(supplierId ?? [])];
   return who.length ? { ...rest, who } : rest;
+}
+
+/** "Edit project": name, site address and install date (empty clears the last two). */
+export async function editProjectAction(_prev: ActionResult, form: FormData): Promise<ActionResult> {
+  const values = keptValues(form);
+  try {
+    const actor = await requireApiUser("designer");
+    const projectId = readFormId(form, "projectId", "That project");
+    await getProjectForStaff(actor, projectId);
+    const { name, siteAddress, installDate } = formValues(form);
+    await updateProject(actor, projectId, editProjectSchema.parse({ name: name ?? "", siteAddress: siteAddress ?? "", installDate: installDate ?? "" }));
+    revalidatePath(`/studio/projects/${projectId}`, "layout");
+    return { ok: true, data: undefined };
+  } catch (error) {
+    return failure(error, values);
+  }
 }
