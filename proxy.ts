@@ -7,7 +7,7 @@ import { contentSecurityPolicy } from "@/lib/security-headers";
  * on every page, action and route. Private pages without a session cookie go to sign-in and come
  * back after it.
  */
-const PRIVATE = /^\/(studio|client|supplier|home)(\/|$)/;
+const PRIVATE = /^\/(studio|client|supplier|home|account|welcome)(\/|$)/;
 const development = env.NODE_ENV !== "production";
 
 export function proxy(request: NextRequest) {
