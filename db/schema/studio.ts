@@ -40,6 +40,29 @@ export const studioMembers = sqliteTable(
 export type StudioMember = typeof studioMembers.$inferSelect;
 
 /** What a supplier or trade does (labels in lib/suppliers/trades.ts). The first nine are the original keys; keep them. */
+/**
+ * An invitation to join a studio's team sent to an address that already has an account. The
+ * person sees it after signing in and joins only if they accept; the inviting studio sees it as
+ * "invited, not joined yet", exactly like a brand-new designer who has not signed in.
+ */
+export const studioInvitations = sqliteTable(
+  "studio_invitation",
+  {
+    id: id(),
+    studioId: text("studio_id")
+      .notNull()
+      .references(() => studios.id, { onDelete: "cascade" }),
+    email: text("email").notNull(),
+    /** The name the studio typed for them. */
+    name: text("name"),
+    role: text("role", { enum: studioRoles }).notNull(),
+    invitedBy: text("invited_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("studio_invitation_unique").on(t.studioId, t.email), index("studio_invitation_email_idx").on(t.email)],
+);
+export type StudioInvitation = typeof studioInvitations.$inferSelect;
+
 export const trades = [
   "stone",
   "joinery",
