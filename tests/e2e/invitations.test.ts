@@ -25,7 +25,7 @@ describe("the designer invites (JavaScript on)", () => {
     await page.waitForURL(/\/studio$/);
     await page.goto(PROJECT);
     const form = inviteForm(page);
-    await form.getByLabel("They are").selectOption({ label: "Contact at Kiln Lane Tiles & Bathware (tiles)" });
+    await form.getByLabel("They are").selectOption({ label: "Contact at Kiln Lane Tiles & Bathware (Tiler)" });
     await form.getByLabel("Name", { exact: true }).fill("Kiln Lane orders");
     await form.getByLabel("E-mail address").fill("orders-at-kiln");
     await form.getByRole("button", { name: "Send invitation" }).click();
