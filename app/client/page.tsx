@@ -4,6 +4,7 @@ import { todayUtc } from "@/db/queries/attention";
 import { getProjectBudget } from "@/db/queries/decision-budget";
 import { getClientHome } from "@/db/queries/homes";
 import { listPendingInvitations } from "@/db/queries/invitations";
+import { listMyStudioInvitations } from "@/db/queries/studio-invitations";
 import { BudgetSummary } from "@/components/decisions/budget-summary";
 import { PendingInvitations } from "@/components/invitations/pending-invitations";
 import { Badge, Card, EmptyState, Notice, PageHeader } from "@/components/ui";
@@ -14,12 +15,12 @@ export const metadata: Metadata = { title: "My project" };
 
 export default async function ClientHome() {
   const actor = await requireRole("client");
-  const [{ projects, waiting, boards }, invitations] = await Promise.all([getClientHome(actor), listPendingInvitations(actor)]);
+  const [{ projects, waiting, boards }, invitations, studioInvitations] = await Promise.all([getClientHome(actor), listPendingInvitations(actor), listMyStudioInvitations(actor)]);
   const budgets = new Map(await Promise.all(projects.map(async (p) => [p.id, await getProjectBudget(p.id)] as const)));
   const today = todayUtc();
   return (
     <div className="space-y-8">
-      <PendingInvitations invitations={invitations} />
+      <PendingInvitations invitations={invitations} studioInvitations={studioInvitations} />
       {projects.map((project) => {
         const mine = waiting.filter((d) => d.projectId === project.id);
         const budget = budgets.get(project.id);

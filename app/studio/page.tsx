@@ -2,7 +2,9 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { getStudioAttention, todayUtc } from "@/db/queries/attention";
 import { listProjectsForActor } from "@/db/queries/projects";
+import { listMyStudioInvitations } from "@/db/queries/studio-invitations";
 import { StudioAttentionList } from "@/components/attention/studio-attention";
+import { PendingInvitations } from "@/components/invitations/pending-invitations";
 import { Card, EmptyState, LinkButton, PageHeader } from "@/components/ui";
 import { requireRole } from "@/lib/auth/session";
 import { formatDay } from "@/lib/format";
@@ -12,9 +14,10 @@ export const metadata: Metadata = { title: "Projects" };
 export default async function StudioHome() {
   const actor = await requireRole("designer");
   const today = todayUtc();
-  const [projects, attention] = await Promise.all([
+  const [projects, attention, studioInvitations] = await Promise.all([
     listProjectsForActor(actor),
     getStudioAttention(actor, today),
+    listMyStudioInvitations(actor),
   ]);
   return (
     <div className="space-y-8">
@@ -23,6 +26,7 @@ export default async function StudioHome() {
         title="Projects"
         actions={<LinkButton href="/studio/projects/new">New project</LinkButton>}
       />
+      <PendingInvitations invitations={[]} studioInvitations={studioInvitations} />
       {projects.length > 0 && (
         <Card title="Needs attention">
           <StudioAttentionList attention={attention} today={today} />

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { getSupplierHome } from "@/db/queries/homes";
 import { listPendingInvitations } from "@/db/queries/invitations";
+import { listMyStudioInvitations } from "@/db/queries/studio-invitations";
 import { PendingInvitations } from "@/components/invitations/pending-invitations";
 import { Badge, Card, EmptyState, PageHeader } from "@/components/ui";
 import { requireRole } from "@/lib/auth/session";
@@ -10,11 +11,11 @@ export const metadata: Metadata = { title: "Issued to me" };
 
 export default async function SupplierHome() {
   const actor = await requireRole("supplier");
-  const [revisions, invitations] = await Promise.all([getSupplierHome(actor), listPendingInvitations(actor)]);
+  const [revisions, invitations, studioInvitations] = await Promise.all([getSupplierHome(actor), listPendingInvitations(actor), listMyStudioInvitations(actor)]);
   return (
     <div className="space-y-8">
       <PageHeader title="Issued to you" description="Specification revisions with lines for your company, newest first." />
-      <PendingInvitations invitations={invitations} />
+      <PendingInvitations invitations={invitations} studioInvitations={studioInvitations} />
       {revisions.length === 0 ? (
         <EmptyState title="Nothing issued to you yet">
           When a designer issues a specification with lines for you, you&apos;ll get an e-mail and it will appear here.

@@ -1,27 +1,27 @@
 "use client";
 
-import { useState } from "react";
+import type { CSSProperties } from "react";
 import { LinkButton, Notice, Swatch } from "@/components/ui";
-import { DAYLIGHT, describeLight } from "@/lib/boards/lights";
+import { DAYLIGHT, describeLight, paintSurround } from "@/lib/boards/lights";
 import type { BoardView } from "@/lib/boards/types";
 import { BoardPicture } from "./board-picture";
 import { ClientCheck } from "./client-check";
 import { LightPicker } from "./light-picker";
-import { useBoard } from "./use-board";
+import { useBoardUnderLight } from "./use-board";
 
 /** The homeowner's board: to look at under different lights, with the checks in plain words. */
 export function BoardClientView({ initial, printHref }: { initial: BoardView; printHref: string }) {
-  const [cct, setCct] = useState<number>(DAYLIGHT.cct);
-  const query = useBoard(initial.board.id, cct, initial);
-  const view = query.data ?? initial;
+  const light = useBoardUnderLight(initial.board.id, initial);
+  const view = light.view;
   const items = new Map(view.items.map((i) => [i.id, i]));
   const daylight = view.light.cct === DAYLIGHT.cct;
   return (
-    <div className="flex flex-col gap-6">
+    // The surround (bg-surround) is painted under the same light as the swatches on it.
+    <div className="flex flex-col gap-6" style={{ "--color-surround": paintSurround(view.light.cct) } as CSSProperties}>
       <Notice tone="caution" title="About colours on screen">
         {view.cautions.screen}
       </Notice>
-      <LightPicker cct={cct} onChange={setCct} busy={query.isFetching} />
+      <LightPicker cct={light.pickedCct} shownCct={view.light.cct} onChange={light.chooseLight} busy={light.busy} problem={light.lightProblem} />
       <BoardPicture items={view.items} daylight={daylight} title={`The ${view.board.name} board ${describeLight(view.light)}`} />
       <section aria-labelledby="meet-title" className="flex flex-col gap-3">
         <h2 id="meet-title" className="font-display text-2xl font-semibold text-ink">

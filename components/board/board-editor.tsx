@@ -1,10 +1,10 @@
 "use client";
 
-import { useState } from "react";
+import { useState, type CSSProperties } from "react";
 import { Notice } from "@/components/ui";
 import { DEFAULT_SIZE, findFreeSpot } from "@/lib/boards/canvas";
 import { suggestLabel } from "@/lib/boards/labels";
-import { DAYLIGHT } from "@/lib/boards/lights";
+import { DAYLIGHT, paintSurround } from "@/lib/boards/lights";
 import type { BoardView, FinderHit } from "@/lib/boards/types";
 import { BoardCanvas } from "./board-canvas";
 import { ChecksPanel } from "./checks-panel";
@@ -13,10 +13,7 @@ import { FinishPicker } from "./finish-picker";
 import { ItemInspector } from "./item-inspector";
 import { LightPicker } from "./light-picker";
 import { PairsEditor } from "./pairs-editor";
-import { useBoard, useBoardChanges } from "./use-board";
-
-const LAMP_NOTE =
-  "Swatches are tinted the way this lamp shifts them against daylight. In the room your eyes adjust and the whole room shifts together, so judge how the finishes change against each other, not the tint itself.";
+import { useBoardChanges, useBoardUnderLight } from "./use-board";
 
 type Props = {
   initial: BoardView;
@@ -27,10 +24,9 @@ type Props = {
 /** The designer's board: canvas and checks side by side, pairs and the finish picker below. */
 export function BoardEditor({ initial, categories, boardsPath }: Props) {
   const boardId = initial.board.id;
-  const [cct, setCct] = useState<number>(DAYLIGHT.cct);
-  const query = useBoard(boardId, cct, initial);
-  const { change, message } = useBoardChanges(boardId, cct);
-  const view = query.data ?? initial;
+  const light = useBoardUnderLight(boardId, initial);
+  const { change, message } = useBoardChanges(boardId, light.shownCct);
+  const view = light.view;
   const [selectedId, setSelectedId] = useState<string | null>(null);
   const [chosenPairId, setChosenPairId] = useState<string | null>(null);
   const chosen = view.checks.find((c) => c.pairId === chosenPairId);
@@ -53,8 +49,13 @@ export function BoardEditor({ initial, categories, boardsPath }: Props) {
       )}
       <div className="flex flex-col gap-4 sm:flex-row sm:items-end sm:justify-between">
         <div className="flex flex-col gap-2">
-          <LightPicker cct={cct} onChange={setCct} busy={query.isFetching} />
-          {cct !== DAYLIGHT.cct && <p className="max-w-prose text-sm text-ink-soft">{LAMP_NOTE}</p>}
+          <LightPicker
+            cct={light.pickedCct}
+            shownCct={view.light.cct}
+            onChange={light.chooseLight}
+            busy={light.busy}
+            problem={light.lightProblem}
+          />
         </div>
         <div className="sm:w-80">
           <DuplicateBoard boardId={boardId} name={view.board.name} version={view.board.version} boardsPath={boardsPath} />
@@ -62,7 +63,9 @@ export function BoardEditor({ initial, categories, boardsPath }: Props) {
       </div>
       <div className="grid items-start gap-8 lg:grid-cols-[minmax(0,1fr)_23rem]">
         <div className="flex flex-col gap-4">
-          <BoardCanvas
+          {/* The surround (bg-surround) is painted under the same light as the swatches on it. */}
+          <div style={{ "--color-surround": paintSurround(view.light.cct) } as CSSProperties}>
+            <BoardCanvas
             items={view.items}
             editable
             daylight={view.light.cct === DAYLIGHT.cct}
@@ -70,7 +73,8 @@ export function BoardEditor({ initial, categories, boardsPath }: Props) {
             highlightIds={chosen ? [chosen.itemAId, chosen.itemBId] : []}
             onSelect={setSelectedId}
             onChange={(itemId, rect) => change({ kind: "move", itemId, rect })}
-          />
+            />
+          </div>
           {view.items.length === 0 && (
             <p className="text-ink-soft">This board is empty. Find a finish below and place it; then drag it where it belongs.</p>
           )}

@@ -1,5 +1,6 @@
 import type { ReactNode } from "react";
-import { Badge, Figure, formatFigure, formatLrv, Notice, Table, TBody, Td, Th, THead, Tr } from "@/components/ui";
+import { Badge, formatLrv, Notice, Table, TBody, Td, Th, THead, Tr } from "@/components/ui";
+import { ShownFigure } from "@/components/ui/shown-figure";
 import { describeLight } from "@/lib/boards/lights";
 import type { BoardView } from "@/lib/boards/types";
 import { INTENT_WORDS, VERDICT_TONE, VERDICT_WORDS } from "@/lib/boards/words";
@@ -84,14 +85,16 @@ export function BoardPrint({ view, actions }: { view: BoardView; actions?: React
                 {check.changed && check.daylight && <span className="mt-1 block text-stone-600">Daylight: {VERDICT_WORDS[check.daylight.verdict]}</span>}
               </Td>
               <Td numeric>
-                <Figure value={check.deltaE} digits={1} />
+                <ShownFigure value={check.deltaE} text={check.figures.deltaE} />
               </Td>
-              <Td numeric>{formatFigure(check.contrastRatio, 1)}:1</Td>
+              <Td numeric>
+                <ShownFigure value={check.contrastRatio} text={`${check.figures.contrastRatio}:1`} />
+              </Td>
               <Td numeric>
                 {formatLrv(check.lrvA)} / {formatLrv(check.lrvB)}
               </Td>
               <Td numeric>
-                <Figure value={check.luminanceContrast} digits={0} unit="%" />
+                <ShownFigure value={check.luminanceContrast} text={check.figures.luminanceContrast} unit="%" />
               </Td>
             </Tr>
           ))}

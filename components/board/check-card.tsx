@@ -1,5 +1,6 @@
 import type { ReactNode } from "react";
-import { Badge, cx, Figure, formatFigure, lrvText } from "@/components/ui";
+import { Badge, cx, formatFigure, lrvText } from "@/components/ui";
+import { ShownFigure } from "@/components/ui/shown-figure";
 import type { BoardCheck } from "@/lib/boards/board-checks";
 import type { BoardItemView } from "@/lib/boards/types";
 import { INTENT_WORDS, VERDICT_TONE, VERDICT_WORDS } from "@/lib/boards/words";
@@ -73,16 +74,16 @@ export function CheckCard({ check, a, b, chosen, onChoose }: Props) {
       </p>
       <dl className="grid grid-cols-2 gap-x-4 gap-y-2 sm:grid-cols-4">
         <Measure label="CIEDE2000">
-          <Figure value={check.deltaE} digits={1} unit="ΔE00" />
+          <ShownFigure value={check.deltaE} text={check.figures.deltaE} unit="ΔE00" />
         </Measure>
         <Measure label="WCAG contrast">
-          <data value={check.contrastRatio.toFixed(2)}>{formatFigure(check.contrastRatio, 1)}:1</data>
+          <ShownFigure value={check.contrastRatio} text={`${check.figures.contrastRatio}:1`} />
         </Measure>
         <Measure label="LRV difference">
-          <Figure value={check.lrvDifference} digits={0} unit="points" />
+          <ShownFigure value={check.lrvDifference} text={check.figures.lrvDifference} unit="points" />
         </Measure>
         <Measure label="Luminance contrast">
-          <Figure value={check.luminanceContrast} digits={0} unit="%" />
+          <ShownFigure value={check.luminanceContrast} text={check.figures.luminanceContrast} unit="%" />
         </Measure>
       </dl>
       {check.daylight && (

@@ -1,6 +1,7 @@
 import { Notice } from "@/components/ui";
 import type { BoardView } from "@/lib/boards/types";
-import { describeLight } from "@/lib/boards/lights";
+import type { CSSProperties } from "react";
+import { DAYLIGHT, describeLight, LAMP_CHECKS_NOTE, paintSurround } from "@/lib/boards/lights";
 import { VERDICT_WORDS } from "@/lib/boards/words";
 import { CheckCard } from "./check-card";
 
@@ -13,11 +14,14 @@ type Props = {
 /** Every pair's check, worst first, with the cautions that always go with judging colour on screen. */
 export function ChecksPanel({ view, chosenPairId, onChoose }: Props) {
   const items = new Map(view.items.map((i) => [i.id, i]));
-  const lamp = view.checks.some((c) => c.daylight !== null);
-  const changed = view.checks.filter((c) => c.changed).length;
   const { fail, borderline, pass } = view.counts;
   return (
-    <section aria-labelledby="checks-title" className="flex flex-col gap-4 lg:sticky lg:top-4 lg:max-h-[calc(100dvh-2rem)]">
+    <section
+      aria-labelledby="checks-title"
+      className="flex flex-col gap-4 lg:sticky lg:top-4 lg:max-h-[calc(100dvh-2rem)]"
+      // The chips' surround is painted under the same light as the chips.
+      style={{ "--color-surround": paintSurround(view.light.cct) } as CSSProperties}
+    >
       <div className="flex flex-col gap-1">
         <h2 id="checks-title" className="font-display text-2xl font-semibold text-ink">
           Checks
@@ -25,14 +29,17 @@ export function ChecksPanel({ view, chosenPairId, onChoose }: Props) {
         <p className="text-ink-soft" aria-live="polite">
           {describeLight(view.light, true)}: {fail} {VERDICT_WORDS.fail.toLowerCase()}
           {fail === 1 ? "" : "s"}, {borderline} to look at closely, {pass} working as meant.
-          {lamp && ` ${changed === 0 ? "No verdict changes from daylight." : `${changed} verdict${changed === 1 ? "" : "s"} changed from daylight.`}`}
         </p>
       </div>
       <Notice tone="caution" title="Screens are not samples">
         <p>{view.cautions.screen}</p>
         <p className="mt-1">{view.cautions.access}</p>
       </Notice>
-      {lamp && <p className="text-sm text-ink-soft">{view.cautions.lrvUnderLight}</p>}
+      {view.light.cct !== DAYLIGHT.cct && (
+        <p className="text-sm text-ink-soft" data-lamp-checks="">
+          {LAMP_CHECKS_NOTE}
+        </p>
+      )}
       {view.settingsIgnored && (
         <Notice tone="caution">The studio&apos;s own check settings contradict each other, so these checks use the standard thresholds.</Notice>
       )}

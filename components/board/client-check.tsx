@@ -1,4 +1,5 @@
-import { Badge, Figure, formatFigure, formatLrv } from "@/components/ui";
+import { Badge, formatLrv } from "@/components/ui";
+import { ShownFigure } from "@/components/ui/shown-figure";
 import type { BoardCheck } from "@/lib/boards/board-checks";
 import type { BoardItemView } from "@/lib/boards/types";
 import { INTENT_WORDS, VERDICT_TONE, VERDICT_WORDS } from "@/lib/boards/words";
@@ -29,15 +30,12 @@ export function ClientCheck({ check, a, b }: { check: BoardCheck; a: BoardItemVi
         {INTENT_WORDS[check.intent]}
         {check.accessRelevant ? ", and it matters for getting around safely" : ""}. {check.reason}
       </p>
-      {check.changed && check.daylight && (
-        <p className="text-ink-soft">Under this light the verdict changes: in daylight it is “{VERDICT_WORDS[check.daylight.verdict]}”.</p>
-      )}
       <details className="rounded-md bg-stone-50">
         <summary className="flex min-h-tap cursor-pointer items-center px-3 text-ink">The numbers</summary>
         <dl className="grid grid-cols-2 gap-x-4 gap-y-2 px-3 pb-3 figures">
           <dt className="text-stone-600">Colour difference</dt>
           <dd>
-            <Figure value={check.deltaE} digits={1} unit="ΔE00" />
+            <ShownFigure value={check.deltaE} text={check.figures.deltaE} unit="ΔE00" />
           </dd>
           <dt className="text-stone-600">Light reflectance</dt>
           <dd>
@@ -45,10 +43,12 @@ export function ClientCheck({ check, a, b }: { check: BoardCheck; a: BoardItemVi
           </dd>
           <dt className="text-stone-600">Luminance contrast</dt>
           <dd>
-            <Figure value={check.luminanceContrast} digits={0} unit="%" />
+            <ShownFigure value={check.luminanceContrast} text={check.figures.luminanceContrast} unit="%" />
           </dd>
           <dt className="text-stone-600">WCAG contrast</dt>
-          <dd>{formatFigure(check.contrastRatio, 1)}:1</dd>
+          <dd>
+            <ShownFigure value={check.contrastRatio} text={`${check.figures.contrastRatio}:1`} />
+          </dd>
         </dl>
       </details>
     </li>

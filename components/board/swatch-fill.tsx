@@ -6,7 +6,8 @@ type Props = { finish: Pick<BoardFinish, "name" | "tint" | "imageUrl">; daylight
 
 /**
  * The colour of a swatch on a board, edge to edge, with its label in a neutral tab. A photo is
- * used only in daylight: under a lamp the flat colour is re-tinted and a photo could not be.
+ * used only in daylight: under a lamp the flat colour is painted as an eye adapted to the lamp
+ * sees it (paintUnderLight), and a photo could not be.
  */
 export function SwatchFill({ finish, daylight, label, emphasised = false }: Props) {
   return (

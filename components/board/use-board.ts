@@ -1,9 +1,9 @@
 "use client";
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { useCallback, useState } from "react";
+import { useCallback, useRef, useState } from "react";
 import { applyChange, describeRequest, type BoardChange } from "@/lib/boards/changes";
-import { DAYLIGHT } from "@/lib/boards/lights";
+import { DAYLIGHT, describeLight, findLight } from "@/lib/boards/lights";
 import type { BoardView } from "@/lib/boards/types";
 import { boardKey, BoardRequestError, fetchBoard, sendChange } from "./board-fetch";
 
@@ -16,8 +16,64 @@ export function useBoard(boardId: string, cct: number, initial: BoardView) {
     queryKey: boardKey(boardId, cct),
     queryFn: () => fetchBoard(boardId, cct),
     initialData: cct === DAYLIGHT.cct ? initial : undefined,
-    placeholderData: (previous) => previous,
   });
+}
+
+function lightName(cct: number): string {
+  const light = findLight(cct) ?? DAYLIGHT;
+  return describeLight(light);
+}
+
+/**
+ * The board and the light it is shown under. A new light is fetched first and shown only once it
+ * has arrived: until then the picker marks the light asked for as busy; if the fetch fails the
+ * picker goes back to the light still on screen and `lightProblem` says what happened, so the
+ * colours and checks on screen are never those of another light than the one marked.
+ */
+export function useBoardUnderLight(boardId: string, initial: BoardView) {
+  const queryClient = useQueryClient();
+  const [shown, setShown] = useState<number>(DAYLIGHT.cct);
+  const [asked, setAsked] = useState<number | null>(null);
+  const [lightProblem, setLightProblem] = useState<string | null>(null);
+  const latest = useRef(0);
+  const query = useBoard(boardId, shown, initial);
+
+  const chooseLight = useCallback(
+    (cct: number) => {
+      const ticket = ++latest.current;
+      setLightProblem(null);
+      if (cct === shown) {
+        setAsked(null);
+        return;
+      }
+      setAsked(cct);
+      queryClient
+        .fetchQuery({ queryKey: boardKey(boardId, cct), queryFn: () => fetchBoard(boardId, cct), staleTime: 0 })
+        .then(() => {
+          if (ticket !== latest.current) return;
+          setShown(cct);
+          setAsked(null);
+        })
+        .catch((error: unknown) => {
+          if (ticket !== latest.current) return;
+          setAsked(null);
+          const why = error instanceof Error && error.message ? ` ${error.message}` : "";
+          setLightProblem(`The board could not be loaded ${lightName(cct)}.${why} It is still shown ${lightName(shown)}.`);
+        });
+    },
+    [boardId, queryClient, shown],
+  );
+
+  return {
+    view: query.data ?? initial,
+    /** The light whose colours and checks are on screen. */
+    shownCct: shown,
+    /** The light the picker marks: the one asked for while it loads, else the one shown. */
+    pickedCct: asked ?? shown,
+    busy: asked !== null || query.isFetching,
+    lightProblem,
+    chooseLight,
+  };
 }
 
 /**

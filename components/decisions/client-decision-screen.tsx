@@ -38,7 +38,6 @@ export function ClientDecisionScreen({ initial, justLocked, today }: Props) {
   const carried = view.options.find((o) => o.id === view.lockedOptionId);
   const offered = view.options.filter((o) => !o.addedByVariation);
   const current = view.currentChoice;
-  const firstApproval = view.approvals.find((a) => !a.variationId);
   const openVariation = view.variations.some((v) => v.status === "requested" || v.status === "priced");
 
   return (
@@ -56,7 +55,7 @@ export function ClientDecisionScreen({ initial, justLocked, today }: Props) {
         )}
       </header>
 
-      {locked && carried && <LockedBanner approval={firstApproval} optionLabel={carried.label} justLocked={justLocked} audience="client" />}
+      {locked && carried && <LockedBanner approvals={view.approvals} carriedOptionId={carried.id} optionLabel={carried.label} justLocked={justLocked} audience="client" />}
       {!locked && <ClientPickPanel view={view} pending={pick.isPending} onNote={(comment) => current && pick.mutate({ optionId: current.optionId, comment })} />}
       {error && (
         <p role="alert" className="rounded-md bg-problem-wash px-3 py-2 text-problem-ink">

@@ -2,14 +2,16 @@
 
 import { m, useReducedMotion } from "framer-motion";
 import { MotionScope } from "@/components/motion-scope";
+import { readLockFacts } from "@/lib/decisions/lock-facts";
 import type { ApprovalView } from "@/lib/decisions/types";
 import { When } from "./when";
 
 /**
- * "Approved and locked", with who approved and when. Right after approving, the padlock closes
- * once so the person sees that the decision is now fixed; never under reduced motion.
+ * "Approved and locked", with who approved what the decision carries and when, read from the
+ * approval records; after a variation, also who first approved what. Right after approving, the
+ * padlock closes once so the person sees that the decision is now fixed; never under reduced motion.
  */
-type Props = { approval: ApprovalView | undefined; optionLabel: string; justLocked: boolean; audience: "client" | "staff" };
+type Props = { approvals: readonly ApprovalView[]; carriedOptionId: string; optionLabel: string; justLocked: boolean; audience: "client" | "staff" };
 
 export function LockedBanner(props: Props) {
   return (
@@ -19,8 +21,9 @@ export function LockedBanner(props: Props) {
   );
 }
 
-function Banner({ approval, optionLabel, justLocked, audience }: Props) {
+function Banner({ approvals, carriedOptionId, optionLabel, justLocked, audience }: Props) {
   const reduce = useReducedMotion();
+  const { carrying, first } = readLockFacts(approvals, carriedOptionId);
   const animate = justLocked && !reduce;
   return (
     <m.div
@@ -46,9 +49,14 @@ function Banner({ approval, optionLabel, justLocked, audience }: Props) {
       </svg>
       <div className="min-w-0">
         <p className="font-semibold text-ok-ink">Approved and locked: {optionLabel}</p>
-        {approval && (
-          <p className="text-ink-soft">
-            Approved by {approval.by.name} on <When iso={approval.at} />.
+        {carrying && (
+          <p className="text-ink-soft" data-testid="locked-by">
+            {carrying.variationId ? "Changed by a variation approved" : "Approved"} by {carrying.by.name} on <When iso={carrying.at} />.
+          </p>
+        )}
+        {first && (
+          <p className="text-ink-soft" data-testid="first-approved-by">
+            First approved as “{first.optionLabel}” by {first.by.name} on <When iso={first.at} />.
           </p>
         )}
         <p className="text-ink-soft">

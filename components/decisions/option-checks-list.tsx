@@ -1,4 +1,5 @@
-import { Figure, ToneIcon } from "@/components/ui";
+import { ToneIcon } from "@/components/ui";
+import { ShownFigure } from "@/components/ui/shown-figure";
 import type { OptionChecks } from "@/lib/decisions/option-checks";
 
 /** The colour checks that matter for one option, worst first, in plain words with the numbers beside them. */
@@ -31,7 +32,7 @@ export function OptionChecksList({ checks, boardName }: { checks: OptionChecks; 
             <span>
               <span className="font-medium">{c.between}:</span> {c.reason}{" "}
               <span className="whitespace-nowrap text-stone-600">
-                (<Figure value={c.deltaE} digits={1} unit="ΔE00" />)
+                (<ShownFigure value={c.deltaE} text={c.figures.deltaE} unit="ΔE00" />)
               </span>
             </span>
           </li>

@@ -61,7 +61,7 @@ export function StudioDecisionScreen({ initial, today }: { initial: DecisionView
         ))}
       </dl>
       {lateOrder && <Notice tone="caution" title="Due after the order-by date">If the client takes until the due date, the slowest option can&apos;t arrive by install. Consider an earlier due date.</Notice>}
-      {locked && carried && <LockedBanner approval={view.approvals.find((a) => !a.variationId)} optionLabel={carried.label} justLocked={false} audience="staff" />}
+      {locked && carried && <LockedBanner approvals={view.approvals} carriedOptionId={carried.id} optionLabel={carried.label} justLocked={false} audience="staff" />}
       {view.specNeedsRevision && (
         <Notice tone="caution" title="The specification needs a new revision">
           A variation to this decision was approved after the last revision was issued, so the suppliers' copy is out of date.{" "}

@@ -26,6 +26,12 @@ export function VariationList({ variations, hrefFor, actionWord }: Props) {
             <p>“{v.reason}”</p>
             <p className="text-sm text-ink-soft">
               Asked by {v.requestedBy.name} · <When iso={v.requestedAt} />
+              {v.pricedBy && v.pricedAt !== null && (
+                <>
+                  {" "}
+                  · priced by {v.pricedBy.name} · <When iso={new Date(v.pricedAt).toISOString()} />
+                </>
+              )}
               {v.decidedBy && v.decidedAt && (
                 <>
                   {" "}

@@ -45,7 +45,15 @@ export function VariationSummary({ view, variation }: { view: DecisionView; vari
           {variation.pricedBy && (
             <>
               <dt className="text-ink-soft">Priced by</dt>
-              <dd>{variation.pricedBy.name}</dd>
+              <dd>
+                {variation.pricedBy.name}
+                {variation.pricedAt !== null && (
+                  <>
+                    {" "}
+                    · <When iso={new Date(variation.pricedAt).toISOString()} />
+                  </>
+                )}
+              </dd>
             </>
           )}
         </dl>

@@ -1,14 +1,16 @@
 "use client";
 
 import { useActionState } from "react";
-import { answerInvitationAction } from "@/app/welcome/actions";
+import { answerInvitationAction, answerStudioInvitationAction } from "@/app/welcome/actions";
 import { FormMessage } from "@/components/auth/form-message";
 import { Button } from "@/components/ui";
 import { idle } from "@/lib/actions/result";
 
-/** Accept and Decline for one invitation: two submit buttons of one plain form. */
-export function AnswerInvitationForm({ invitationId, canAccept, label }: { invitationId: string; canAccept: boolean; label: string }) {
-  const [state, action, pending] = useActionState(answerInvitationAction, idle);
+type Props = { invitationId: string; canAccept: boolean; label: string; kind?: "project" | "studio" };
+
+/** Accept and Decline for one invitation (to a project, or to a studio's team): two submit buttons of one plain form. */
+export function AnswerInvitationForm({ invitationId, canAccept, label, kind = "project" }: Props) {
+  const [state, action, pending] = useActionState(kind === "studio" ? answerStudioInvitationAction : answerInvitationAction, idle);
   return (
     <form action={action} className="space-y-3">
       <input type="hidden" name="invitationId" value={invitationId} />

@@ -4,6 +4,7 @@ import { Figure, Money, Swatch, Td, Tr } from "@/components/ui";
 import { finishCategoryLabels } from "@/lib/validation/finish";
 import { CautionTitles } from "./caution-titles";
 import { describeUnit, formatDays, lrvSourceShort, lrvSourceWords } from "./library-words";
+import { LrvFlag } from "./lrv-flag";
 
 /** One table row per finish (wide screens). */
 export function FinishRows({ items }: { items: FinishSummary[] }) {
@@ -30,6 +31,7 @@ export function FinishRows({ items }: { items: FinishSummary[] }) {
       <Td numeric>
         <Figure value={f.lrv} digits={Number.isInteger(f.lrv) ? 0 : 1} />
         <span className="block text-xs text-stone-600">{lrvSourceShort[f.lrvSource]}</span>
+        <LrvFlag finish={f} />
       </Td>
       <Td className="min-w-40 text-xs">
         <CautionTitles keys={f.cautions} />
@@ -59,6 +61,7 @@ export function FinishCards({ items }: { items: FinishSummary[] }) {
             <span className="figures">
               <Money cents={f.unitPriceCents} /> {describeUnit(f.unit)} · {formatDays(f.leadTimeDays)} · LRV <Figure value={f.lrv} digits={Number.isInteger(f.lrv) ? 0 : 1} /> ({lrvSourceWords[f.lrvSource]})
             </span>
+            <LrvFlag finish={f} align="start" />
             {f.archived && <span className="text-stone-600">Archived</span>}
             {f.cautions.length > 0 && (
               <div className="mt-1">

@@ -1,6 +1,6 @@
 import type { FinishDetail, FinishPage, FinishSummary } from "@/db/queries/finish-dto";
 import type { FieldErrors } from "@/lib/http";
-import type { Measurement } from "@/lib/uploads/measured";
+import type { Measurement, UploadMeasurement } from "@/lib/uploads/measured";
 import type { FinishListQuery } from "@/lib/validation/finish";
 
 /** A refusal from one of our routes, with its plain message and field errors. */
@@ -36,7 +36,7 @@ export const sendJson = (method: "POST" | "PATCH" | "DELETE", body?: unknown): R
 export const libraryKeys = {
   all: ["finishes"] as const,
   page: (query: FinishListQuery) => ["finishes", "page", query] as const,
-  similar: (finishId: string, maxDeltaE: number) => ["finishes", "similar", finishId, maxDeltaE] as const,
+  similar: (finishId: string, maxDeltaE: number, anyCategory = false) => ["finishes", "similar", finishId, maxDeltaE, anyCategory] as const,
 };
 
 /** The query string for a list query, leaving out defaults so links stay short. */
@@ -56,14 +56,15 @@ export function toSearch(query: FinishListQuery): string {
 
 export const fetchFinishPage = (query: FinishListQuery) => requestJson<FinishPage>(`/api/finishes${toSearch(query)}`);
 
-export type SimilarAnswer = { maxDeltaE: number; items: (FinishSummary & { deltaE: number })[] };
-export const fetchSimilar = (finishId: string, maxDeltaE: number) =>
-  requestJson<SimilarAnswer>(`/api/finishes/${encodeURIComponent(finishId)}/similar?maxDeltaE=${maxDeltaE}`);
+export type SimilarAnswer = { maxDeltaE: number; anyCategory: boolean; items: (FinishSummary & { deltaE: number })[] };
+export const fetchSimilar = (finishId: string, maxDeltaE: number, anyCategory = false) =>
+  requestJson<SimilarAnswer>(`/api/finishes/${encodeURIComponent(finishId)}/similar?maxDeltaE=${maxDeltaE}${anyCategory ? "&anyCategory=1" : ""}`);
 
-export type UploadAnswer = Measurement & { id: string; url: string; thumbUrl: string; width: number; height: number };
+export type UploadAnswer = UploadMeasurement & { id: string; url: string; thumbUrl: string; width: number; height: number };
 
-export const measureAgain = (imageId: string, neutral?: { left: number; top: number; width: number; height: number }) =>
-  requestJson<Measurement>(`/api/uploads/${encodeURIComponent(imageId)}/measure`, sendJson("POST", neutral ? { neutral } : {}));
+/** Measure a stored photo again; with a card, its box and reflectance (per cent) correct cast and exposure. */
+export const measureAgain = (imageId: string, card?: { neutral: { left: number; top: number; width: number; height: number }; reflectance: number }) =>
+  requestJson<Measurement>(`/api/uploads/${encodeURIComponent(imageId)}/measure`, sendJson("POST", card ?? {}));
 
 export const saveFinish = (finishId: string | null, body: unknown) =>
   requestJson<FinishDetail>(finishId ? `/api/finishes/${encodeURIComponent(finishId)}` : "/api/finishes", sendJson(finishId ? "PATCH" : "POST", body));

@@ -14,7 +14,14 @@ const sameLab = (a: readonly number[] | null, b: readonly number[]) => a !== nul
 /** The measured colour and the photo's main colours, to choose the one the finish is kept with. */
 export function MeasuredChoice({ measurement, picked, onPick }: Props) {
   const options = [
-    { key: "measured", label: "Measured colour", detail: measurement.corrected ? "with the light's cast removed" : "glare and shadow left out", ...measurement.colour },
+    {
+      key: "measured",
+      label: "Measured colour",
+      detail: measurement.corrected
+        ? `cast and exposure corrected with the ${measurement.cardReflectance ?? "boxed"}% card`
+        : "no card: the camera's own exposure and white balance",
+      ...measurement.colour,
+    },
     ...measurement.palette.map((p, i) => ({
       key: `palette-${i}`,
       label: i === 0 ? "Main colour" : `Colour ${i + 1}`,

@@ -30,7 +30,7 @@ export async function openProjectForBoards(actor: Actor, projectId: string, mode
 /** A board with its project, room and the studio's check settings, whoever asks; 404 if there is none. */
 export async function readBoardHead(boardId: string) {
   const [row] = await db
-    .select({ board: boards, project: projects, room: rooms, checkSettings: studios.checkSettings })
+    .select({ board: boards, project: projects, room: rooms, checkSettings: studios.checkSettings, accessStandard: studios.accessStandard })
     .from(boards)
     .innerJoin(projects, eq(projects.id, boards.projectId))
     .innerJoin(rooms, eq(rooms.id, boards.roomId))
@@ -52,8 +52,8 @@ export async function openBoard(actor: Actor, boardId: string, mode: BoardMode) 
   return { ...row, access: boardAccess(actor, row.project, mode) };
 }
 
-/** The thresholds this studio's checks use: its own settings over the defaults. */
+/** The thresholds this studio's checks use: its own settings over the defaults, and its access standard. */
 export async function getStudioThresholds(studioId: string) {
-  const studio = await db.query.studios.findFirst({ where: eq(studios.id, studioId), columns: { checkSettings: true } });
-  return resolveThresholds(studio?.checkSettings ?? null);
+  const studio = await db.query.studios.findFirst({ where: eq(studios.id, studioId), columns: { checkSettings: true, accessStandard: true } });
+  return resolveThresholds(studio?.checkSettings ?? null, studio?.accessStandard);
 }

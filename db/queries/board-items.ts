@@ -4,6 +4,7 @@ import { HttpError } from "@/lib/http";
 import type { AddItemInput, ChangeItemInput, ReorderItemsInput } from "@/lib/validation/board";
 import { itemRectSchema } from "@/lib/validation/board";
 import { openBoard } from "./board-access";
+import { auditBoardEdit } from "./board-audit";
 import { claimBoardVersion, runBoardWrite, type Tx } from "./board-version";
 import type { Actor } from "./users";
 
@@ -27,7 +28,7 @@ export async function addBoardItem(actor: Actor, boardId: string, input: AddItem
   return runBoardWrite(async (tx) => {
     await claimBoardVersion(tx, board.id, input.version);
     const [finish] = await tx
-      .select({ id: finishes.id, archivedAt: finishes.archivedAt })
+      .select({ id: finishes.id, archivedAt: finishes.archivedAt, name: finishes.name })
       .from(finishes)
       .where(and(eq(finishes.id, input.finishId), eq(finishes.studioId, project.studioId)))
       .limit(1);
@@ -54,13 +55,14 @@ export async function addBoardItem(actor: Actor, boardId: string, input: AddItem
       })
       .returning({ id: boardItems.id });
     if (!item) throw new Error("item insert returned nothing");
+    await auditBoardEdit(tx, actor, board, project, "board.item-added", { itemId: item.id, label: input.label, finish: finish.name });
     return item.id;
   });
 }
 
 /** Move, resize or relabel one swatch; the resulting rectangle must still be wholly on the canvas. */
 export async function changeBoardItem(actor: Actor, boardId: string, itemId: string, input: ChangeItemInput) {
-  const { board } = await openBoard(actor, boardId, "edit");
+  const { board, project } = await openBoard(actor, boardId, "edit");
   await runBoardWrite(async (tx) => {
     await claimBoardVersion(tx, board.id, input.version);
     const item = await findItem(tx, board.id, itemId);
@@ -79,11 +81,17 @@ export async function changeBoardItem(actor: Actor, boardId: string, itemId: str
       .update(boardItems)
       .set({ ...next.data, label: input.label ?? item.label })
       .where(eq(boardItems.id, item.id));
+    const changes = [
+      ...(next.data.x !== item.x || next.data.y !== item.y ? ["moved"] : []),
+      ...(next.data.width !== item.width || next.data.height !== item.height ? ["resized"] : []),
+      ...((input.label ?? item.label) !== item.label ? ["renamed"] : []),
+    ];
+    await auditBoardEdit(tx, actor, board, project, "board.item-changed", { itemId: item.id, label: input.label ?? item.label, changes });
   });
 }
 
 export async function removeBoardItem(actor: Actor, boardId: string, itemId: string, version: number) {
-  const { board } = await openBoard(actor, boardId, "edit");
+  const { board, project } = await openBoard(actor, boardId, "edit");
   await runBoardWrite(async (tx) => {
     await claimBoardVersion(tx, board.id, version);
     const item = await findItem(tx, board.id, itemId);
@@ -91,12 +99,13 @@ export async function removeBoardItem(actor: Actor, boardId: string, itemId: str
     await tx.delete(adjacencies).where(and(eq(adjacencies.boardId, board.id), eq(adjacencies.itemAId, item.id)));
     await tx.delete(adjacencies).where(and(eq(adjacencies.boardId, board.id), eq(adjacencies.itemBId, item.id)));
     await tx.delete(boardItems).where(eq(boardItems.id, item.id));
+    await auditBoardEdit(tx, actor, board, project, "board.item-removed", { itemId: item.id, label: item.label });
   });
 }
 
 /** New stacking order, bottom first. The list must name every swatch on the board exactly once. */
 export async function reorderBoardItems(actor: Actor, boardId: string, input: ReorderItemsInput) {
-  const { board } = await openBoard(actor, boardId, "edit");
+  const { board, project } = await openBoard(actor, boardId, "edit");
   await runBoardWrite(async (tx) => {
     await claimBoardVersion(tx, board.id, input.version);
     const current = await tx.select({ id: boardItems.id }).from(boardItems).where(eq(boardItems.boardId, board.id));
@@ -108,5 +117,6 @@ export async function reorderBoardItems(actor: Actor, boardId: string, input: Re
     for (const [i, id] of input.itemIds.entries()) {
       await tx.update(boardItems).set({ sortOrder: i }).where(eq(boardItems.id, id));
     }
+    await auditBoardEdit(tx, actor, board, project, "board.items-reordered", { count: input.itemIds.length });
   });
 }

@@ -4,6 +4,7 @@ import { pairKey } from "@/lib/boards/proposed-pairs";
 import { conflict, HttpError } from "@/lib/http";
 import type { AddPairInput, ChangePairInput } from "@/lib/validation/board";
 import { openBoard } from "./board-access";
+import { auditBoardEdit } from "./board-audit";
 import { claimBoardVersion, runBoardWrite, type Tx } from "./board-version";
 import type { Actor } from "./users";
 
@@ -17,7 +18,7 @@ async function findPair(tx: Tx, boardId: string, pairId: string) {
 
 /** Two swatches of this board that meet. Both must be on this board: a pair never spans two. */
 export async function addBoardPair(actor: Actor, boardId: string, input: AddPairInput) {
-  const { board } = await openBoard(actor, boardId, "edit");
+  const { board, project } = await openBoard(actor, boardId, "edit");
   return runBoardWrite(async (tx) => {
     await claimBoardVersion(tx, board.id, input.version);
     const found = await tx
@@ -38,12 +39,13 @@ export async function addBoardPair(actor: Actor, boardId: string, input: AddPair
       .values({ boardId: board.id, itemAId: input.itemAId, itemBId: input.itemBId, intent: input.intent, accessRelevant: input.accessRelevant })
       .returning({ id: adjacencies.id });
     if (!pair) throw new Error("pair insert returned nothing");
+    await auditBoardEdit(tx, actor, board, project, "board.pair-added", { pairId: pair.id, intent: input.intent });
     return pair.id;
   });
 }
 
 export async function changeBoardPair(actor: Actor, boardId: string, pairId: string, input: ChangePairInput) {
-  const { board } = await openBoard(actor, boardId, "edit");
+  const { board, project } = await openBoard(actor, boardId, "edit");
   await runBoardWrite(async (tx) => {
     await claimBoardVersion(tx, board.id, input.version);
     const pair = await findPair(tx, board.id, pairId);
@@ -51,15 +53,17 @@ export async function changeBoardPair(actor: Actor, boardId: string, pairId: str
       .update(adjacencies)
       .set({ intent: input.intent ?? pair.intent, accessRelevant: input.accessRelevant ?? pair.accessRelevant })
       .where(eq(adjacencies.id, pair.id));
+    await auditBoardEdit(tx, actor, board, project, "board.pair-changed", { pairId: pair.id, intent: input.intent ?? pair.intent });
   });
 }
 
 export async function removeBoardPair(actor: Actor, boardId: string, pairId: string, version: number) {
-  const { board } = await openBoard(actor, boardId, "edit");
+  const { board, project } = await openBoard(actor, boardId, "edit");
   await runBoardWrite(async (tx) => {
     await claimBoardVersion(tx, board.id, version);
     const pair = await findPair(tx, board.id, pairId);
     await tx.delete(adjacencies).where(eq(adjacencies.id, pair.id));
+    await auditBoardEdit(tx, actor, board, project, "board.pair-removed", { pairId: pair.id });
   });
 }
 

@@ -43,9 +43,9 @@ export async function getBoardJson(actor: Actor, boardId: string, cct: number = 
   return boardJson(key, async () => encodeJson(await view()));
 }
 
-async function assembleFromHead({ board, project, room, checkSettings }: Awaited<ReturnType<typeof readBoardHead>>, cct: number, access: "edit" | "read") {
+async function assembleFromHead({ board, project, room, checkSettings, accessStandard }: Awaited<ReturnType<typeof readBoardHead>>, cct: number, access: "edit" | "read") {
   const [items, pairs] = await Promise.all([readItemRows([board.id]), readPairRows([board.id])]);
-  const { thresholds, settingsIgnored } = resolveThresholds(checkSettings);
+  const { thresholds, settingsIgnored } = resolveThresholds(checkSettings, accessStandard);
   return assembleBoardView({
     board: { id: board.id, name: board.name, version: board.version, updatedAt: board.updatedAt },
     project: { id: project.id, name: project.name },

@@ -51,10 +51,11 @@ export async function chooseOption(actor: Actor, decisionId: string, input: Choi
     if (!updated) throw conflict(STALE_MESSAGE);
     const [choice] = await tx
       .insert(choices)
-      .values({ decisionId: decision.id, optionId: option.id, userId: actor.userId, comment: input.comment })
+      .values({ decisionId: decision.id, optionId: option.id, userId: actor.userId, comment: input.comment, createdAt: new Date() })
       .returning();
     await writeAudit(
       {
+        at: choice?.createdAt,
         studioId: project.studioId,
         projectId: project.id,
         actorId: actor.userId,
@@ -94,7 +95,7 @@ export async function approveDecision(actor: Actor, decisionId: string, input: A
 
     const latest = (await loadLatestChoices([decision.id], tx)).get(decision.id);
     if (latest?.optionId !== option.id) {
-      await tx.insert(choices).values({ decisionId: decision.id, optionId: option.id, userId: actor.userId, comment: null });
+      await tx.insert(choices).values({ decisionId: decision.id, optionId: option.id, userId: actor.userId, comment: null, createdAt: now });
     }
     const [approval] = await tx
       .insert(approvals)
@@ -102,6 +103,7 @@ export async function approveDecision(actor: Actor, decisionId: string, input: A
       .returning();
     await writeAudit(
       {
+        at: now,
         studioId: project.studioId,
         projectId: project.id,
         actorId: actor.userId,

@@ -1,9 +1,11 @@
-import { and, asc, desc, eq, inArray, max, or } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, max, ne, or } from "drizzle-orm";
 import { db } from "@/db";
 import { approvals, decisions, finishes, optionLines, options, projects, rooms, specRevisions, studios, users, variations, type Decision, type Project } from "@/db/schema";
 import { projectRole } from "@/lib/auth/permissions";
 import { summariseBudget } from "@/lib/decisions/budget";
 import { suggestOrderBy, type OrderBySuggestion } from "@/lib/decisions/order-by";
+import { readAccessStandard } from "@/lib/boards/check-settings";
+import type { ThresholdOverrides } from "@/lib/colour";
 import { readStudioThresholds } from "@/lib/decisions/thresholds";
 import type { DecisionListItem } from "@/lib/decisions/types";
 import { forbidden, notFound } from "@/lib/http";
@@ -41,12 +43,17 @@ export async function getProjectForDecisions(actor: Actor, projectId: string) {
   return { project, role };
 }
 
-export async function getStudioThresholds(studioId: string, reader: Reader = db) {
-  const [studio] = await reader.select({ checkSettings: studios.checkSettings }).from(studios).where(eq(studios.id, studioId));
-  return readStudioThresholds(studio?.checkSettings);
+/** The studio's check settings over the defaults, with the access standard it follows (AS 1428.1 unless chosen). */
+export async function getStudioThresholds(studioId: string, reader: Reader = db): Promise<ThresholdOverrides> {
+  const [studio] = await reader.select({ checkSettings: studios.checkSettings, accessStandard: studios.accessStandard }).from(studios).where(eq(studios.id, studioId));
+  return { ...readStudioThresholds(studio?.checkSettings), accessStandard: readAccessStandard(studio?.accessStandard) };
 }
 
-/** Lead times of every finish on every option of these decisions, for order-by dates. */
+/**
+ * Order-by dates: a locked decision's from the finishes of the option it carries (the locked one,
+ * or the option an approved variation put in its place), the same lines the specification issues;
+ * an open one's from every option still offered, since the client may pick any.
+ */
 export async function loadOrderBy(decisionIds: string[], installDate: string | null, reader: Reader = db) {
   const out = new Map<string, OrderBySuggestion | null>();
   if (decisionIds.length === 0) return out;
@@ -54,8 +61,17 @@ export async function loadOrderBy(decisionIds: string[], installDate: string | n
     .select({ decisionId: options.decisionId, name: finishes.name, leadTimeDays: finishes.leadTimeDays })
     .from(optionLines)
     .innerJoin(options, eq(options.id, optionLines.optionId))
+    .innerJoin(decisions, eq(decisions.id, options.decisionId))
     .innerJoin(finishes, eq(finishes.id, optionLines.finishId))
-    .where(inArray(options.decisionId, decisionIds));
+    .where(
+      and(
+        inArray(options.decisionId, decisionIds),
+        or(
+          and(eq(decisions.status, "locked"), eq(options.id, decisions.lockedOptionId)),
+          and(ne(decisions.status, "locked"), eq(options.addedByVariation, false)),
+        ),
+      ),
+    );
   for (const id of decisionIds) out.set(id, suggestOrderBy(installDate, rows.filter((r) => r.decisionId === id)));
   return out;
 }

@@ -4,6 +4,7 @@ import { and, asc, eq, isNotNull } from "drizzle-orm";
 import { db } from "@/db";
 import { writeTransaction } from "./serial-write";
 import { finishes, suppliers } from "@/db/schema";
+import { checkPublishedLrv } from "@/lib/colour";
 import { HttpError } from "@/lib/http";
 import { roundLab, settleColour } from "@/lib/validation/finish-colour";
 import { neutraliseCell } from "@/lib/csv-cell";
@@ -37,6 +38,8 @@ export async function exportFinishesCsv(actor: Actor): Promise<string> {
       f.lrvSource === "published" ? String(f.lrv) : "",
       f.cautions.join("; "), text(finish.careNotes),
       f.hex, String(f.lrv), f.lrvSource, f.colourSource, f.archived ? "yes" : "", f.id,
+      // A published LRV far from the one its own colour implies (lib/colour/lrv-check.ts), in words.
+      checkPublishedLrv(f)?.note ?? "",
     ];
   });
   return stringify([[...csvColumns, ...csvInfoColumns], ...records]);

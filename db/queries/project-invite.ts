@@ -1,6 +1,6 @@
 import { and, eq, isNull } from "drizzle-orm";
 import { db } from "@/db";
-import { projectInvitations, projectMembers, studioMembers, suppliers, users, type Project } from "@/db/schema";
+import { projectInvitations, projectMembers, studioInvitations, studioMembers, suppliers, users, type Project } from "@/db/schema";
 import { conflict, HttpError } from "@/lib/http";
 import type { ProjectInviteeInput } from "@/lib/validation/project-invite";
 import { writeAudit } from "./audit";
@@ -30,7 +30,7 @@ export async function inviteToProject(actor: Actor, projectId: string, input: Pr
   const details = { name: input.name, role: input.role, supplierId };
   return writeTransaction(async (tx) => {
     const user = await tx.query.users.findFirst({ where: eq(users.email, input.email) });
-    if (user && (await isStaffOf(tx, user.id, project.studioId))) {
+    if (user && (await isStaffOf(tx, user, project.studioId))) {
       throw conflict("That person is on your studio's team; they see every project already.");
     }
     const member = user
@@ -80,6 +80,12 @@ async function checkSupplier(studioId: string, input: ProjectInviteeInput): Prom
   return supplier.id;
 }
 
-async function isStaffOf(tx: Tx, userId: string, studioId: string) {
-  return Boolean(await tx.query.studioMembers.findFirst({ where: and(eq(studioMembers.userId, userId), eq(studioMembers.studioId, studioId)) }));
+/**
+ * On the studio's team, or invited onto it: a new designer not yet signed in is already staff, so
+ * an account holder invited to the team counts too, or this answer would tell the two apart.
+ */
+async function isStaffOf(tx: Tx, user: { id: string; email: string }, studioId: string) {
+  const member = await tx.query.studioMembers.findFirst({ where: and(eq(studioMembers.userId, user.id), eq(studioMembers.studioId, studioId)) });
+  const invited = member ? undefined : await tx.query.studioInvitations.findFirst({ where: and(eq(studioInvitations.email, user.email), eq(studioInvitations.studioId, studioId)) });
+  return Boolean(member ?? invited);
 }

@@ -5,11 +5,13 @@ import { forbidden } from "@/lib/http";
 import { diffLines, linesForSupplier, type SpecDiff } from "@/lib/spec/diff";
 import { verifyRevision } from "@/lib/spec/revision-content";
 import { noFinishDetail, type LineFinishDetail } from "@/lib/spec/line-detail";
+import type { LineChange } from "@/lib/spec/line-change";
 import { lineStatus, type LineStatus } from "@/lib/spec/status";
 import { getProjectForActor } from "./projects";
 import { readLineFinishDetails, readStudioContact } from "./spec-line-detail";
 import { todayUtc } from "./attention";
-import { openRevision, readAcknowledgements, readIssuerName, readNeighbour, readRevisionLines, type RevisionLine } from "./spec-revisions";
+import { readLineChanges } from "./spec-line-changes";
+import { openRevision, readAcknowledgements, readIssuerName, readLatestRevision, readNeighbour, readRevisionLines, type RevisionLine } from "./spec-revisions";
 import type { Actor } from "./users";
 
 export type RevisionSummary = {
@@ -51,8 +53,11 @@ export async function listRevisionsForActor(actor: Actor, projectId: string): Pr
   return supplierId === null ? rows : rows.filter((r) => r.lineCount > 0);
 }
 
-/** A line as a screen shows it: the frozen content, order dates, status, and the finish's surface, format and photo. */
-export type ViewLine = RevisionLine & LineFinishDetail & { status: LineStatus };
+/**
+ * A line as a screen shows it: the frozen content, order dates, status, the finish's surface,
+ * format and photo, and whether an approved variation has overtaken it since it was issued.
+ */
+export type ViewLine = RevisionLine & LineFinishDetail & { status: LineStatus; change: LineChange | null };
 
 /** The latest earlier revision this supplier acknowledged: what "changed for you" is measured from. */
 async function readLastAcknowledgedBefore(projectId: string, sequence: number, supplierId: string) {
@@ -90,11 +95,14 @@ export async function getRevisionView(actor: Actor, revisionId: string, today = 
   const verified = verifyRevision({ ...revision, lines: allLines });
   const visible = supplierId ? linesForSupplier(allLines, supplierId) : allLines;
   // Read for the visible lines only: a supplier never learns anything of another supplier's finishes.
-  const details = await readLineFinishDetails(visible.map((l) => l.finishId));
+  const [details, latest] = await Promise.all([readLineFinishDetails(visible.map((l) => l.finishId)), readLatestRevision(db, project.id)]);
+  // Only the latest revision's lines can be overtaken one by one; an older revision is replaced whole.
+  const lineChanges = latest?.id === revision.id ? await readLineChanges(db, revision, visible) : new Map<string, LineChange>();
   const lines: ViewLine[] = visible.map((l) => ({
     ...l,
     ...(details.get(l.finishId ?? "") ?? noFinishDetail),
     status: lineStatus({ orderByDate: l.orderByDate, order: l.order, today, installDate: project.installDate }),
+    change: lineChanges.get(l.id) ?? null,
   }));
   const baseline = supplierId
     ? await readLastAcknowledgedBefore(project.id, revision.sequence, supplierId)
@@ -130,3 +138,23 @@ export async function getRevisionView(actor: Actor, revisionId: string, today = 
 }
 
 export type RevisionView = Awaited<ReturnType<typeof getRevisionView>>;
+
+/**
+ * Lines of the project's latest revision that an approved variation has overtaken (and those the
+ * designer confirmed), for the studio's specification page. Null before the first revision.
+ */
+export async function listChangedIssuedLines(actor: Actor, projectId: string) {
+  const { project, role } = await getProjectForActor(actor, projectId);
+  if (role !== "staff") throw forbidden();
+  const latest = await readLatestRevision(db, project.id);
+  if (!latest) return null;
+  const lines = await readRevisionLines(db, latest.id);
+  const changes = await readLineChanges(db, latest, lines);
+  return {
+    revision: { id: latest.id, letter: latest.letter },
+    lines: lines.flatMap((l) => {
+      const change = changes.get(l.id);
+      return change ? [{ id: l.id, item: l.item, room: l.room, location: l.location, finishName: l.finishName, supplierName: l.supplierName, change }] : [];
+    }),
+  };
+}

@@ -1,4 +1,4 @@
-import { and, count, eq } from "drizzle-orm";
+import { and, count, eq, isNotNull, or } from "drizzle-orm";
 import { db } from "@/db";
 import { studioMembers, users, type StudioRole } from "@/db/schema";
 import { conflict, forbidden, notFound } from "@/lib/http";
@@ -15,21 +15,24 @@ function ownersStudio(actor: Actor): string {
   return actor.studio.id;
 }
 
-async function findStaff(tx: Tx, studioId: string, userId: string) {
+/**
+ * A person who has joined the studio's staff. Someone added who has never signed in is "invited,
+ * not joined yet", like an account holder who hasn't accepted a studio invitation: both are 404
+ * here (withdraw them instead), so these calls can't tell the two apart.
+ */
+async function findStaff(tx: Tx | typeof db, studioId: string, userId: string) {
   const [row] = await tx
     .select({ role: studioMembers.role, name: users.name, email: users.email })
     .from(studioMembers)
     .innerJoin(users, eq(users.id, studioMembers.userId))
-    .where(and(eq(studioMembers.studioId, studioId), eq(studioMembers.userId, userId)));
+    .where(and(eq(studioMembers.studioId, studioId), eq(studioMembers.userId, userId), or(isNotNull(users.emailVerified), isNotNull(users.passwordHash))));
   if (!row) throw notFound("That person on your studio's staff");
   return row;
 }
 
 /** Access before the body: owners only (403), and a person on their own studio's staff (404 otherwise). */
 export async function assertStaffOfMyStudio(actor: Actor, userId: string): Promise<void> {
-  const studioId = ownersStudio(actor);
-  const row = await db.query.studioMembers.findFirst({ where: and(eq(studioMembers.studioId, studioId), eq(studioMembers.userId, userId)) });
-  if (!row) throw notFound("That person on your studio's staff");
+  await findStaff(db, ownersStudio(actor), userId);
 }
 
 async function ownerCount(tx: Tx, studioId: string) {

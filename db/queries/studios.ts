@@ -1,12 +1,13 @@
 import bcrypt from "bcryptjs";
 import { and, asc, eq, isNull } from "drizzle-orm";
 import { db } from "@/db";
-import { writeTransaction } from "./serial-write";
-import { studioMembers, studios, suppliers, users } from "@/db/schema";
+import { writeTransaction, type Tx } from "./serial-write";
+import { studioInvitations, studioMembers, studios, suppliers, users } from "@/db/schema";
 import { conflict } from "@/lib/http";
 import type { SignUpInput } from "@/lib/validation/auth";
 import { writeAudit } from "./audit";
 import { takeInviteAllowance } from "./invite-limits";
+import { hasSignedIn } from "./project-invite";
 
 export const PASSWORD_COST = 11;
 
@@ -36,44 +37,62 @@ export async function createStudioWithOwner(input: SignUpInput): Promise<SignUpO
 }
 
 /**
- * What the team invite e-mails: "added" (a new person, now a designer, who signs in by e-mailed
- * link) or "has-account" (nothing added; they get a note to ask for an invitation to another
- * address). The owner is told the same either way, so the form can't be used to learn who has an
- * account or works for another studio.
+ * What the team invite e-mails: "added" (a new person, now on the staff, who signs in by e-mailed
+ * link) or "invited" (someone with an account, whoever they are, who signs in to accept). The
+ * owner is told the same either way, the audit entry is the same, and the team list shows both as
+ * "Invited, not joined yet", so the form can't be used to learn who has an account.
  */
-export type DesignerInviteOutcome = { kind: "added" | "has-account"; email: string };
+export type DesignerInviteOutcome = { kind: "added" | "invited"; email: string };
 
 /**
- * Adds a designer to the studio. Inviting again someone already added who hasn't signed in yet
- * sends the e-mail again; someone on this studio's staff who has (the owner sees them listed) is 409.
- * Every invitation, either way, counts against the invitation limits (invite-limits.ts).
+ * Invites a designer to the studio. A new address becomes a person on the staff at once; an
+ * address that already has an account only gets a studio invitation to accept. Inviting again
+ * someone not joined yet sends the e-mail again (with the new name); someone on this studio's
+ * staff who has joined (the owner sees them listed) is 409. Every invitation, either way, counts
+ * against the invitation limits (invite-limits.ts).
  */
 export async function addDesigner(studioId: string, invitedBy: string, input: { email: string; name: string }): Promise<DesignerInviteOutcome> {
   return writeTransaction(async (tx) => {
     const user = await tx.query.users.findFirst({ where: eq(users.email, input.email) });
     const ours = user ? await tx.query.studioMembers.findFirst({ where: and(eq(studioMembers.userId, user.id), eq(studioMembers.studioId, studioId)) }) : undefined;
-    if (user && ours && (user.emailVerified || user.passwordHash)) throw conflict("That person is already on your studio's staff.");
+    if (user && ours && hasSignedIn(user)) throw conflict("That person is already on your studio's staff.");
     await takeInviteAllowance(tx, studioId, input.email);
-    if (user && ours) return { kind: "added", email: user.email };
-    if (user) return { kind: "has-account", email: user.email };
-    const [created] = await tx.insert(users).values({ email: input.email, name: input.name }).returning();
-    if (!created) throw new Error("designer insert returned nothing");
-    await tx.insert(studioMembers).values({ studioId, userId: created.id, role: "designer" });
+    const outcome = await recordDesignerInvite(tx, studioId, invitedBy, input, user && { id: user.id, ours: Boolean(ours) });
     await writeAudit(
-      { studioId, actorId: invitedBy, action: "designer.invited", entityType: "user", entityId: created.id, detail: { email: input.email } },
+      { studioId, actorId: invitedBy, action: "designer.invited", entityType: "studio_person", entityId: outcome.entryId, detail: { email: input.email } },
       tx,
     );
-    return { kind: "added", email: created.email };
+    return { kind: outcome.kind, email: input.email };
   });
 }
 
-export async function listStaff(studioId: string) {
-  return db
-    .select({ userId: users.id, name: users.name, email: users.email, role: studioMembers.role })
-    .from(studioMembers)
-    .innerJoin(users, eq(users.id, studioMembers.userId))
-    .where(eq(studioMembers.studioId, studioId))
-    .orderBy(asc(studioMembers.role), asc(users.name));
+/** The row behind the team list's entry: the new person's membership, or the account holder's invitation. */
+async function recordDesignerInvite(
+  tx: Tx,
+  studioId: string,
+  invitedBy: string,
+  input: { email: string; name: string },
+  user: { id: string; ours: boolean } | undefined,
+): Promise<{ kind: DesignerInviteOutcome["kind"]; entryId: string }> {
+  if (user?.ours) {
+    // Someone this studio added who hasn't signed in yet: nobody else has named them.
+    await tx.update(users).set({ name: input.name }).where(eq(users.id, user.id));
+    return { kind: "added", entryId: user.id };
+  }
+  if (user) {
+    const values = { name: input.name, role: "designer" as const, invitedBy };
+    const [invitation] = await tx
+      .insert(studioInvitations)
+      .values({ studioId, email: input.email, ...values })
+      .onConflictDoUpdate({ target: [studioInvitations.studioId, studioInvitations.email], set: values })
+      .returning();
+    if (!invitation) throw new Error("studio invitation insert returned nothing");
+    return { kind: "invited", entryId: invitation.id };
+  }
+  const [created] = await tx.insert(users).values({ email: input.email, name: input.name }).returning();
+  if (!created) throw new Error("designer insert returned nothing");
+  await tx.insert(studioMembers).values({ studioId, userId: created.id, role: "designer" });
+  return { kind: "added", entryId: created.id };
 }
 
 /** The studio's suppliers that may be chosen for something new: archived ones are left out. */

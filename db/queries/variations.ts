@@ -17,10 +17,11 @@ const OPEN_STATUSES = ["requested", "priced"] as const;
 const finished = (v: Variation) =>
   conflict(`This variation is already ${v.status}. Ask for a new one if something should still change.`);
 
-function audit(tx: Tx, actor: Actor, access: DecisionAccess, action: string, v: { id: string }, detail: Record<string, unknown>) {
+/** The audit row carries the time the variation's own record gives the step (asked, priced, decided). */
+function audit(tx: Tx, actor: Actor, access: DecisionAccess, action: string, v: { id: string }, at: Date, detail: Record<string, unknown>) {
   const { decision, project } = access;
   return writeAudit(
-    { studioId: project.studioId, projectId: project.id, actorId: actor.userId, action, entityType: "variation", entityId: v.id, detail: { title: decision.title, decisionId: decision.id, ...detail } },
+    { studioId: project.studioId, projectId: project.id, actorId: actor.userId, action, entityType: "variation", entityId: v.id, at, detail: { title: decision.title, decisionId: decision.id, ...detail } },
     tx,
   );
 }
@@ -42,10 +43,10 @@ export async function requestVariation(actor: Actor, decisionId: string, input: 
     }
     const [variation] = await tx
       .insert(variations)
-      .values({ decisionId: decision.id, requestedBy: actor.userId, reason: input.reason, optionId: input.optionId })
+      .values({ decisionId: decision.id, requestedBy: actor.userId, reason: input.reason, optionId: input.optionId, createdAt: new Date() })
       .returning();
     if (!variation) throw new Error("variation insert returned nothing");
-    await audit(tx, actor, access, "variation.requested", variation, { reason: input.reason });
+    await audit(tx, actor, access, "variation.requested", variation, variation.createdAt, { reason: input.reason });
     return { ...access, variation };
   });
 }
@@ -82,7 +83,7 @@ export async function priceVariation(actor: Actor, decisionId: string, variation
       .where(and(eq(variations.id, variation.id), inArray(variations.status, [...OPEN_STATUSES])))
       .returning();
     if (!priced) throw finished(variation);
-    await audit(tx, actor, access, "variation.priced", priced, { priceDeltaCents: input.priceDeltaCents, timeImpactDays: input.timeImpactDays, optionId });
+    await audit(tx, actor, access, "variation.priced", priced, priced.pricedAt ?? new Date(), { priceDeltaCents: input.priceDeltaCents, timeImpactDays: input.timeImpactDays, optionId });
     return { ...access, variation: priced };
   });
 }
@@ -127,7 +128,7 @@ export async function approveVariation(actor: Actor, decisionId: string, variati
       .insert(approvals)
       .values({ decisionId: decision.id, optionId: variation.optionId, userId: actor.userId, variationId: variation.id, snapshot, approvedAt: now })
       .returning();
-    await audit(tx, actor, access, "variation.approved", approved, {
+    await audit(tx, actor, access, "variation.approved", approved, now, {
       option: snapshot.option,
       priceDeltaCents: approved.priceDeltaCents,
       timeImpactDays: approved.timeImpactDays,
@@ -150,7 +151,7 @@ export async function closeVariation(actor: Actor, decisionId: string, variation
       .where(and(eq(variations.id, variation.id), inArray(variations.status, [...OPEN_STATUSES])))
       .returning();
     if (!closed) throw finished(variation);
-    await audit(tx, actor, access, `variation.${outcome}`, closed, {});
+    await audit(tx, actor, access, `variation.${outcome}`, closed, closed.decidedAt ?? new Date(), {});
     return { ...access, variation: closed };
   });
 }

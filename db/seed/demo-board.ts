@@ -4,6 +4,9 @@ import { demoId } from "./ids";
 
 const f = (key: string) => demoId("finish", key);
 
+/** When the designer started the demo's board (demo-activity.ts logs the board's making from here). */
+export const DEMO_BOARD_STARTED = "2026-11-03T23:00:00Z";
+
 /**
  * A kitchen sample board laid out on the 1200 × 800 canvas, with the surfaces that meet. Most
  * pairs work; the timber island and the benchtop edge against the timber floor are too close in
@@ -12,7 +15,7 @@ const f = (key: string) => demoId("finish", key);
 export async function seedDemoBoard(db: Database, project: string) {
   const board = demoId("board", "kitchen-a");
   await db.insert(t.boards).values([
-    { id: board, projectId: project, roomId: demoId("room", "kitchen"), name: "Kitchen: warm limestone scheme" },
+    { id: board, projectId: project, roomId: demoId("room", "kitchen"), name: "Kitchen: warm limestone scheme", createdAt: new Date(DEMO_BOARD_STARTED) },
   ]).onConflictDoNothing();
   const items = [
     ["benchtop", "Benchtop", "saltbush", 40, 40, 360, 240],

@@ -12,9 +12,27 @@ type DecisionSpec = {
   status: t.DecisionStatus; options: OptionSpec[]; lockedOption?: string;
 };
 
+/**
+ * The demo's story, in order (UTC): the designer opens the decisions on 5 Nov and sends them;
+ * the clients pick; the two benchtops are approved and locked on 18 Nov; revision A goes out on
+ * 19 Nov; Callum asks on 22 Nov for a lighter laundry top, the designer prices it on 24 Nov and
+ * he approves it on 26 Nov; Noor asks about the island edge on 29 Nov. demo-activity.ts logs each
+ * step at these same times.
+ */
+export const demoTimes = {
+  decisionsOpened: "2026-11-05T00:00:00Z",
+  decisionsSent: "2026-11-05T02:00:00Z",
+  lockedAt: { "kitchen-benchtop": "2026-11-18T03:20:00Z", "laundry-benchtop": "2026-11-18T03:25:00Z" } as Record<string, string>,
+  laundryVariation: { asked: "2026-11-22T08:15:00Z", priced: "2026-11-24T02:00:00Z", approved: "2026-11-26T05:00:00Z" },
+  islandEdgeAsked: "2026-11-29T07:40:00Z",
+} as const;
+
+/** The minute after `iso`, n minutes on: each decision opened (and sent) a minute after the one before. */
+export const minutesAfter = (iso: string, n: number) => new Date(new Date(iso).getTime() + n * 60_000);
+
 const at = (iso: string) => new Date(iso);
 
-const decisionSpecs: DecisionSpec[] = [
+export const decisionSpecs: DecisionSpec[] = [
   { key: "kitchen-benchtop", room: "kitchen", title: "Benchtop", allowance: 900000, due: "2026-11-20", status: "locked", lockedOption: "kb-limestone",
     options: [
       { key: "kb-limestone", label: "Saltbush Limestone, honed", price: 884000, notes: "Warm, soft veining; will patina. Sealed yearly.", lines: [["saltbush", 6.5, "m²"]] },
@@ -76,12 +94,14 @@ async function studioRates(db: Database, projectId: string): Promise<StudioRates
 /** Decisions in every state: open, chosen, locked, and locked then varied. */
 export async function seedDemoDecisions(db: Database, ctx: { project: string; user: (key: string) => string }) {
   const rates = await studioRates(db, ctx.project);
-  for (const d of decisionSpecs) {
+  for (const [n, d] of decisionSpecs.entries()) {
+    const lockedAt = demoTimes.lockedAt[d.key];
     await db.insert(t.decisions).values({
       id: demoId("decision", d.key), projectId: ctx.project, roomId: demoId("room", d.room), title: d.title,
       allowanceCents: d.allowance, dueDate: d.due, status: d.status,
       lockedOptionId: d.lockedOption ? demoId("option", d.lockedOption) : null,
-      lockedAt: d.lockedOption ? at("2026-11-18T03:20:00Z") : null,
+      lockedAt: d.lockedOption && lockedAt ? at(lockedAt) : null,
+      createdAt: minutesAfter(demoTimes.decisionsOpened, n),
     }).onConflictDoNothing();
     for (const [i, o] of d.options.entries()) {
       await db.insert(t.options).values({
@@ -123,8 +143,26 @@ export async function seedDemoDecisions(db: Database, ctx: { project: string; us
   await db.insert(t.variations).values([
     { id: demoId("variation", "lb"), decisionId: demoId("decision", "laundry-benchtop"), requestedBy: ctx.user("client2"), reason: "Lighter top for the small laundry.",
       optionId: demoId("option", "lb-chalk"), status: "approved", priceDeltaCents: 0, timeImpactDays: 0, pricedBy: ctx.user("designer"),
-      pricedAt: at("2026-11-24T02:00:00Z"), decidedBy: ctx.user("client2"), decidedAt: at("2026-11-26T05:00:00Z") },
+      pricedAt: at(demoTimes.laundryVariation.priced), decidedBy: ctx.user("client2"), decidedAt: at(demoTimes.laundryVariation.approved),
+      createdAt: at(demoTimes.laundryVariation.asked), updatedAt: at(demoTimes.laundryVariation.approved) },
     { id: demoId("variation", "kb"), decisionId: demoId("decision", "kitchen-benchtop"), requestedBy: ctx.user("client"),
-      reason: "Could we price a mitred 40 mm edge on the island end?", status: "requested" },
+      reason: "Could we price a mitred 40 mm edge on the island end?", status: "requested",
+      createdAt: at(demoTimes.islandEdgeAsked), updatedAt: at(demoTimes.islandEdgeAsked) },
   ]).onConflictDoNothing();
+  await repairDemoTimes(db);
+}
+
+/**
+ * A demo database seeded before the story had times of its own: variations stamped when the seed
+ * ran (asked after they were approved) and both benchtops locked in the same minute. Put the
+ * seed's own rows right; rows anyone has changed since are left as they are.
+ */
+async function repairDemoTimes(db: Database) {
+  const v = demoTimes.laundryVariation;
+  await db.run(sql`update "variation" set "created_at" = ${Date.parse(v.asked)}
+    where "id" = ${demoId("variation", "lb")} and "created_at" > "priced_at"`);
+  await db.run(sql`update "variation" set "created_at" = ${Date.parse(demoTimes.islandEdgeAsked)}, "updated_at" = ${Date.parse(demoTimes.islandEdgeAsked)}
+    where "id" = ${demoId("variation", "kb")} and "status" = 'requested' and "priced_at" is null and "created_at" > ${Date.parse(demoTimes.islandEdgeAsked)}`);
+  await db.run(sql`update "decision" set "locked_at" = ${Date.parse(demoTimes.lockedAt["laundry-benchtop"] ?? "")}
+    where "id" = ${demoId("decision", "laundry-benchtop")} and "locked_at" = ${Date.parse("2026-11-18T03:20:00Z")}`);
 }

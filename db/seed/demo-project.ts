@@ -1,5 +1,6 @@
 import type { Database } from "@/db/client";
 import * as t from "@/db/schema";
+import { seedDemoActivity } from "./demo-activity";
 import { seedDemoBoard } from "./demo-board";
 import { seedDemoDecisions } from "./demo-decisions";
 import { seedDemoRevision } from "./demo-revision";
@@ -17,6 +18,7 @@ export async function seedDemoProject(db: Database, ctx: Ctx) {
     name: "Marrow Street terrace",
     siteAddress: "14 Marrow Street, Eastbrook",
     installDate: "2027-04-12",
+    createdAt: new Date("2026-11-02T22:00:00Z"),
   }).onConflictDoNothing();
   await db.insert(t.rooms).values([
     { id: demoId("room", "kitchen"), projectId: project, name: "Kitchen", sortOrder: 0 },
@@ -39,4 +41,5 @@ export async function seedDemoProject(db: Database, ctx: Ctx) {
   await seedDemoDecisions(db, { project, user: ctx.user });
   await seedDemoSpec(db);
   await seedDemoRevision(db, { studio: ctx.studio, project, user: ctx.user });
+  await seedDemoActivity(db, { studio: ctx.studio, project, user: ctx.user });
 }

@@ -59,6 +59,6 @@ export async function seedDemoRevision(db: Database, ctx: Ctx) {
     lineId: demoId("spec-line", "a-5"), orderedOn: "2026-11-21", expectedOn: "2027-03-08", updatedBy: ctx.user("stone"), updatedAt: new Date("2026-11-21T01:00:00Z"),
   }).onConflictDoNothing();
   await db.insert(t.auditLog).values([
-    { id: demoId("audit", "rev-a"), studioId: ctx.studio, projectId: ctx.project, actorId: ctx.user("designer"), action: "revision.issued", entityType: "spec_revision", entityId: revision, detail: { letter: "A" } },
+    { id: demoId("audit", "rev-a"), studioId: ctx.studio, projectId: ctx.project, actorId: ctx.user("designer"), action: "revision.issued", entityType: "spec_revision", entityId: revision, detail: { letter: "A" }, createdAt: new Date("2026-11-19T00:30:00Z") },
   ]).onConflictDoNothing();
 }

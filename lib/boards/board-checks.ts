@@ -1,5 +1,5 @@
-import { assessPair, toHex, underLight } from "@/lib/colour";
-import type { Lab, PairAssessment, PairIntent, Thresholds, Verdict } from "@/lib/colour";
+import { assessPair, paintUnderLight, showPairFigures } from "@/lib/colour";
+import type { Lab, PairAssessment, PairFigures, PairIntent, Thresholds, Verdict } from "@/lib/colour";
 import { DAYLIGHT } from "./lights";
 import { orderChecks } from "./order-checks";
 
@@ -12,17 +12,24 @@ export type BoardCheck = Omit<PairAssessment, "lrvSource"> & {
   itemBId: string;
   intent: PairIntent;
   accessRelevant: boolean;
-  /** Under a lamp: what the same pair gave in daylight, and whether the verdict differs. */
+  /** The figures as shown beside the verdict, rounded so none contradicts it (showPairFigures). */
+  figures: PairFigures;
+  /**
+   * Under a lamp: what the same pair gave in daylight, and whether the verdict differs. Without
+   * the lamp's spectrum it cannot (see underLight), so `changed` is false; kept so that a lamp
+   * with a measured spectrum can say so when one is added.
+   */
   daylight: { verdict: Verdict; deltaE: number; reason: string } | null;
   changed: boolean;
 };
 
 /**
- * The one way a board's pairs are judged: each side's colour as seen under the lamp (Bradford
- * adaptation from D65, see underLight) and its stored LRV. The stored LRV is the published figure
- * where the maker gives one, otherwise the one computed from the colour; it is a property of the
- * surface measured in daylight, so a lamp changes how the colours read (ΔE00, the verdict for a
- * match or contrast) but not the LRVs or the luminance contrast.
+ * The one way a board's pairs are judged: each side's colour for an eye adapted to the lamp
+ * (CIELAB relative to the lamp's white after a Bradford adaptation, see underLight) and its stored
+ * LRV. The stored LRV is the published figure where the maker gives one, otherwise the one computed
+ * from the colour; it is a property of the surface measured in daylight. Lacking the lamp's
+ * spectrum, the adapted colours are the daylight ones, so every check under a lamp is the
+ * daylight check; tests/unit/colour/lamp-verdicts.test.ts holds both to that.
  */
 export function computeBoardChecks(
   items: readonly CheckedItem[],
@@ -37,16 +44,16 @@ export function computeBoardChecks(
     const a = byId.get(pair.itemAId);
     const b = byId.get(pair.itemBId);
     if (!a || !b) continue; // a pair always has both items; the cascade removes it with either
-    const judge = (labA: Lab, labB: Lab) =>
-      assessPair({
-        a: { lab: labA, lrv: a.lrv },
-        b: { lab: labB, lrv: b.lrv },
-        intent: pair.intent,
-        accessRelevant: pair.accessRelevant,
-        thresholds,
-      });
-    const inDaylight = judge(a.lab, b.lab);
-    const seen = lamp ? judge(underLight(a.lab, cct), underLight(b.lab, cct)) : inDaylight;
+    // An eye adapted to the lamp sees each finish with its daylight CIELAB (underLight, exact in
+    // the maths), so the lamp's check is the daylight one, judged once: recomputing it through
+    // the round trip would only add rounding that could tip a figure sitting on a threshold.
+    const seen = assessPair({
+      a: { lab: a.lab, lrv: a.lrv },
+      b: { lab: b.lab, lrv: b.lrv },
+      intent: pair.intent,
+      accessRelevant: pair.accessRelevant,
+      thresholds,
+    });
     // Fields listed one by one: a rest-spread copy here made every check a slow dictionary-mode
     // object and the whole board ten times slower to judge (bench/boards.ts).
     checks.push({
@@ -64,16 +71,17 @@ export function computeBoardChecks(
       itemBId: pair.itemBId,
       intent: pair.intent,
       accessRelevant: pair.accessRelevant,
-      daylight: lamp ? { verdict: inDaylight.verdict, deltaE: inDaylight.deltaE, reason: inDaylight.reason } : null,
-      changed: lamp && inDaylight.verdict !== seen.verdict,
+      figures: showPairFigures(seen, pair.intent, thresholds),
+      daylight: lamp ? { verdict: seen.verdict, deltaE: seen.deltaE, reason: seen.reason } : null,
+      changed: false,
     });
   }
   return orderChecks(checks);
 }
 
-/** The flat colour of a swatch as it would look under the lamp, for painting the screen. */
+/** The flat colour of a swatch as an eye adapted to the lamp sees it, for painting the screen. */
 export function tintForLight(lab: Lab, cct: number): string {
-  return toHex(cct === DAYLIGHT.cct ? lab : underLight(lab, cct));
+  return paintUnderLight(lab, cct);
 }
 
 export type VerdictCounts = Record<Verdict, number>;

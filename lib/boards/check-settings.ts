@@ -1,8 +1,8 @@
-import { defaultThresholds, mergeThresholds } from "@/lib/colour";
-import type { ThresholdOverrides, Thresholds } from "@/lib/colour";
+import { DEFAULT_ACCESS_STANDARD, defaultThresholds, isAccessStandard, mergeThresholds, THRESHOLD_GROUPS } from "@/lib/colour";
+import type { AccessStandard, ThresholdOverrides, Thresholds } from "@/lib/colour";
 
-type Group = keyof Thresholds;
-const groups = Object.keys(defaultThresholds) as Group[];
+type Group = (typeof THRESHOLD_GROUPS)[number];
+const groups: readonly string[] = THRESHOLD_GROUPS;
 
 function isRecord(value: unknown): value is Record<string, unknown> {
   return typeof value === "object" && value !== null && !Array.isArray(value);
@@ -31,17 +31,24 @@ export function readCheckSettings(raw: unknown): ThresholdOverrides {
   return out as ThresholdOverrides;
 }
 
+/** The studio's access standard as stored; anything unreadable is the default (AS 1428.1). */
+export function readAccessStandard(raw: unknown): AccessStandard {
+  return isAccessStandard(raw) ? raw : DEFAULT_ACCESS_STANDARD;
+}
+
 /**
- * The thresholds a studio's boards are judged by. Settings that contradict each other (say a
- * "noticeable" below "imperceptible") can't be used, so the checks fall back to the defaults
- * rather than fail the whole board; `settingsIgnored` lets the screen say so.
+ * The thresholds a studio's boards are judged by, with the access standard it chose
+ * (studio.access_standard). Settings that contradict each other (say a "noticeable" below
+ * "imperceptible") can't be used, so the checks fall back to the default numbers rather than fail
+ * the whole board; `settingsIgnored` lets the screen say so. The standard is kept either way.
  */
-export function resolveThresholds(raw: unknown): { thresholds: Thresholds; settingsIgnored: boolean } {
+export function resolveThresholds(raw: unknown, accessStandard?: unknown): { thresholds: Thresholds; settingsIgnored: boolean } {
   const overrides = readCheckSettings(raw);
+  const standard = readAccessStandard(accessStandard);
   try {
-    return { thresholds: mergeThresholds(overrides), settingsIgnored: false };
+    return { thresholds: mergeThresholds({ ...overrides, accessStandard: standard }), settingsIgnored: false };
   } catch (error) {
-    if (error instanceof RangeError) return { thresholds: defaultThresholds, settingsIgnored: true };
+    if (error instanceof RangeError) return { thresholds: { ...defaultThresholds, accessStandard: standard }, settingsIgnored: true };
     throw error;
   }
 }

@@ -51,7 +51,9 @@ function pickLrv(finish: FinishColour): [number, LrvSource] {
 /**
  * Judges a pair of finishes the way a designer would: does an intended match read as one colour,
  * does an intended contrast read as deliberate, and, where access matters, is there enough
- * light–dark difference. The worst finding sets the verdict; on a tie the access finding speaks.
+ * light–dark difference by the studio's access standard (`thresholds.accessStandard`, AS 1428.1 unless
+ * told). The worst finding sets the verdict; on a tie the access finding speaks, and an access
+ * pair's reason always names the standard and its result.
  */
 export function assessPair(input: AssessPairInput): PairAssessment {
   const t = input.thresholds ? mergeThresholds(input.thresholds) : defaultThresholds;
@@ -68,10 +70,13 @@ export function assessPair(input: AssessPairInput): PairAssessment {
       ? explainMatch(a.lab, b.lab, deltaE, t.match)
       : explainContrast(deltaE, t.match.noticeable, t.contrast);
   if (input.accessRelevant) {
-    const access = explainAccess(lc, lrvDifference, t.access);
+    const access = explainAccess(lc, lrvDifference, t.access, t.accessStandard);
     if (RANK[access.verdict] >= RANK[finding.verdict]) {
       finding = access;
       decidedBy = "access";
+    } else {
+      // The colour finding is worse, but the standard's result is still said: every access pair names it.
+      finding = { verdict: finding.verdict, reason: `${finding.reason} ${access.reason}` };
     }
   }
 

@@ -12,7 +12,7 @@ const BRADFORD_INVERSE: Matrix3 = [
 ];
 
 /**
- * Bases for von Kries scaling. "bradford" models how the eye adapts (for underLight);
+ * Bases for von Kries scaling. "bradford" models how the eye adapts (for lamps);
  * "srgb" scales linear sRGB channels, which is how a camera's colour cast arises and is undone
  * (white balance), so it is the one for photos.
  */
@@ -34,13 +34,14 @@ export function applyMatrix(m: Matrix3, v: Xyz): Xyz {
 /**
  * von Kries matrix taking XYZ seen under white `from` to the corresponding XYZ under white `to`:
  * into the basis, scale each channel by to/from, and back. Whites need not have Y = 1, so a
- * measured grey card can be the source white directly.
+ * measured grey card can be the source white directly. `degree` below 1 takes only that part of
+ * the way (each gain D × to/from + 1 − D, as CIECAM02's degree of adaptation blends them).
  */
-export function computeAdaptationMatrix(from: Xyz, to: Xyz, basis: AdaptationBasis = "bradford"): Matrix3 {
+export function computeAdaptationMatrix(from: Xyz, to: Xyz, basis: AdaptationBasis = "bradford", degree = 1): Matrix3 {
   const { toSensor, fromSensor } = BASES[basis];
   const s = applyMatrix(toSensor, from);
   const d = applyMatrix(toSensor, to);
-  const gain = [d[0] / s[0], d[1] / s[1], d[2] / s[2]] as const;
+  const gain = [0, 1, 2].map((k) => degree * ((d[k] ?? 0) / (s[k] ?? 1)) + 1 - degree);
   const out: number[] = [];
   for (let row = 0; row < 3; row++) {
     for (let col = 0; col < 3; col++) {
@@ -53,6 +54,16 @@ export function computeAdaptationMatrix(from: Xyz, to: Xyz, basis: AdaptationBas
 }
 
 /** Bradford chromatic adaptation matrix (the usual CAT for corresponding colours). */
-export function computeBradfordMatrix(from: Xyz, to: Xyz): Matrix3 {
-  return computeAdaptationMatrix(from, to, "bradford");
+export function computeBradfordMatrix(from: Xyz, to: Xyz, degree = 1): Matrix3 {
+  return computeAdaptationMatrix(from, to, "bradford", degree);
+}
+
+/**
+ * How far the eye adapts to a light: CIECAM02's degree of adaptation (CIE 159:2004),
+ * D = F × [1 − (1/3.6) × exp((−L_A − 42) / 92)], L_A the adapting luminance in cd/m² and F = 1
+ * for an average surround (a lit room).
+ */
+export function computeDegreeOfAdaptation(adaptingLuminance: number, surroundFactor = 1): number {
+  const d = surroundFactor * (1 - (1 / 3.6) * Math.exp((-adaptingLuminance - 42) / 92));
+  return Math.min(1, Math.max(0, d));
 }

@@ -1,3 +1,5 @@
+import { atLeast, formatAgainst, formatThreshold } from "./figures";
+import { defaultThresholds, type AccessStandard } from "./thresholds";
 import type { Lab } from "./types";
 
 export type Verdict = "pass" | "borderline" | "fail";
@@ -44,36 +46,55 @@ export function explainContrast(deltaE: number, sameBelow: number, t: { nearMiss
 }
 
 type AccessThresholds = { minLuminanceContrast: number; minLrvDifference: number; margin: number };
+type RuleResult = "fails" | "close" | "passes";
 
-export function explainAccess(luminanceContrast: number, lrvDifference: number, t: AccessThresholds): Finding {
-  const lc = `${Math.round(luminanceContrast)}% luminance contrast`;
-  const points = `${Math.round(lrvDifference)} LRV points apart`;
-  const lcShort = t.minLuminanceContrast > 0 && luminanceContrast < t.minLuminanceContrast;
-  const pointsShort = t.minLrvDifference > 0 && lrvDifference < t.minLrvDifference;
-  if (lcShort || pointsShort) {
-    const found = [lcShort ? lc : "", pointsShort ? points : ""].filter(Boolean).join(" and ");
-    const wanted = [
-      lcShort ? `${t.minLuminanceContrast}% (AS 1428.1)` : "",
-      pointsShort ? `${t.minLrvDifference} points (BS 8300-2)` : "",
-    ]
-      .filter(Boolean)
-      .join(" and ");
-    return {
-      verdict: "fail",
-      reason: `Too little light–dark difference for people with low vision to tell these apart: ${found}, where ${wanted} is the usual minimum.`,
-    };
-  }
-  const close =
-    (t.minLuminanceContrast > 0 && luminanceContrast < t.minLuminanceContrast + t.margin) ||
-    (t.minLrvDifference > 0 && lrvDifference < t.minLrvDifference + t.margin);
-  if (close) {
-    return {
-      verdict: "borderline",
-      reason: `Only just enough light–dark difference for people with low vision (${lc}, ${points}); confirm with the suppliers' measured LRVs before relying on it.`,
-    };
-  }
-  return {
-    verdict: "pass",
-    reason: `Enough light–dark difference for people with low vision (${lc}, ${points}).`,
-  };
+const RULE_VERB: Record<RuleResult, string> = { fails: "Fails", close: "Only just passes", passes: "Passes" };
+const RESULT_RANK: Record<RuleResult, number> = { passes: 0, close: 1, fails: 2 };
+
+function judgeRule(value: number, min: number, margin: number): RuleResult {
+  if (value < min) return "fails";
+  return value < min + margin ? "close" : "passes";
+}
+
+/** "(the studio's figure; AS 1428.1 as quoted asks for 30 %)" when a studio has moved a standard's minimum. */
+function studioFigureNote(min: number, published: number, unit: string): string {
+  return min === published ? "" : ` (the studio's figure; the standard as quoted asks for ${formatThreshold(published)}${unit})`;
+}
+
+function describeAs1428(lc: number, t: AccessThresholds): { result: RuleResult; text: string } {
+  const min = t.minLuminanceContrast;
+  const result = judgeRule(lc, min, t.margin);
+  const shown = formatAgainst(lc, 0, [atLeast(min), atLeast(min + t.margin)]);
+  const note = studioFigureNote(min, defaultThresholds.access.minLuminanceContrast, " %");
+  return { result, text: `${RULE_VERB[result]} AS 1428.1: ${shown} % luminance contrast, ${formatThreshold(min)} % needed${note}.` };
+}
+
+function describeBs8300(points: number, t: AccessThresholds): { result: RuleResult; text: string } {
+  const min = t.minLrvDifference;
+  const result = judgeRule(points, min, t.margin);
+  const shown = formatAgainst(points, 0, [atLeast(min), atLeast(min + t.margin)]);
+  const note = studioFigureNote(min, defaultThresholds.access.minLrvDifference, " points");
+  return { result, text: `${RULE_VERB[result]} BS 8300-2: ${shown} LRV ${shown === "1" ? "point" : "points"} apart, ${formatThreshold(min)} needed${note}.` };
+}
+
+const ACCESS_SUMMARY: Record<RuleResult, string> = {
+  fails: "Too little light–dark difference for people with low vision to tell these apart.",
+  close: "Only just enough light–dark difference for people with low vision; confirm with the suppliers' measured LRVs before relying on it.",
+  passes: "Enough light–dark difference for people with low vision.",
+};
+const VERDICT_OF: Record<RuleResult, Verdict> = { fails: "fail", close: "borderline", passes: "pass" };
+
+/**
+ * The low-vision check by the one standard the studio follows, named in the words: AS 1428.1's
+ * luminance contrast, BS 8300-2's LRV points, or both (the worse of the two decides, the failing
+ * rule first). Each figure is rounded so it never reads as meeting a minimum it misses.
+ */
+export function explainAccess(luminanceContrast: number, lrvDifference: number, t: AccessThresholds, standard: AccessStandard): Finding {
+  const as1428 = standard === "bs8300" ? null : describeAs1428(luminanceContrast, t);
+  const bs8300 = standard === "as1428" ? null : describeBs8300(lrvDifference, t);
+  // With both, the failing (or closer) rule speaks first; a tie keeps AS 1428.1 first.
+  const [first, second] = as1428 && bs8300 && RESULT_RANK[bs8300.result] > RESULT_RANK[as1428.result] ? [bs8300, as1428] : [as1428 ?? bs8300, as1428 ? bs8300 : null];
+  const worst = first?.result ?? "passes";
+  const stated = [first?.text, second?.text].filter(Boolean).join(" ");
+  return { verdict: VERDICT_OF[worst], reason: `${stated} ${ACCESS_SUMMARY[worst]}` };
 }

@@ -1,3 +1,5 @@
+import { formatDay } from "@/lib/format";
+
 /** The project's activity log in plain words. Unknown actions (other areas add their own) fall back to their name. */
 
 type Detail = Record<string, unknown> | null | undefined;
@@ -11,6 +13,8 @@ const quoted = (detail: Detail, key: string) => {
   const v = text(detail, key);
   return v ? ` “${v}”` : "";
 };
+
+const letter = (detail: Detail) => (text(detail, "letter") ? ` ${text(detail, "letter")}` : "");
 
 const phrases: Record<string, (d: Detail) => string> = {
   "project.created": () => "created the project",
@@ -39,9 +43,56 @@ const phrases: Record<string, (d: Detail) => string> = {
   "account.updated": () => "changed their own name or phone",
   "account.password_set": () => "set a password",
   "account.password_changed": () => "changed their password",
+  "decision.repriced": (d) => `changed a price on${quoted(d, "title")}`,
+  "revision.issued": (d) => `issued revision${letter(d)} of the specification`,
+  "revision.acknowledged": (d) => `acknowledged revision${letter(d)}`,
+  "line.order-dates": (d) =>
+    `recorded${text(d, "orderedOn") ? ` an order placed ${formatDay(text(d, "orderedOn"))}` : " order dates"} for${quoted(d, "item")}${text(d, "letter") ? ` (revision ${text(d, "letter")})` : ""}${
+      text(d, "expectedOn") ? `, expected ${formatDay(text(d, "expectedOn"))}` : ""
+    }`,
+  "line.confirmed": (d) => `confirmed that${quoted(d, "item")} in revision${letter(d)} stands as issued${text(d, "note") ? `: “${text(d, "note")}”` : ""}`,
+  "fixed-item.added": (d) => `added the fixed item${quoted(d, "item")}`,
+  "fixed-item.changed": () => "changed a fixed item",
+  "fixed-item.removed": (d) => `removed the fixed item${quoted(d, "item")}`,
+  "board.created": (d) => `started the sample board${quoted(d, "name")}`,
+  "board.duplicated": (d) => `copied a sample board${quoted(d, "name") ? ` as${quoted(d, "name")}` : ""}`,
+  "image.uploaded": () => "uploaded a photo",
 };
 
-export function describeAudit(action: string, detail: Detail): string {
+type Part = { action: string; detail: Detail };
+
+const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
+
+function joinWords(words: string[]): string {
+  if (words.length <= 1) return words[0] ?? "";
+  return `${words.slice(0, -1).join(", ")} and ${words[words.length - 1]}`;
+}
+
+/** A run of one person's saves on one board, in a few words: "moved 3 swatches and added 1 swatch on “Kitchen”". */
+export function describeBoardEdits(parts: readonly Part[]): string {
+  const distinct = (filter: (p: Part) => boolean) => new Set(parts.filter(filter).map((p) => text(p.detail, "itemId") ?? text(p.detail, "pairId") ?? "")).size;
+  const changed = (kind: string) => (p: Part) => p.action === "board.item-changed" && Array.isArray(p.detail?.changes) && p.detail.changes.includes(kind);
+  const count = (action: string) => parts.filter((p) => p.action === action).length;
+  const words = [
+    [count("board.item-added"), "added", "swatch", "swatches"],
+    [distinct(changed("moved")), "moved", "swatch", "swatches"],
+    [distinct(changed("resized")), "resized", "swatch", "swatches"],
+    [distinct(changed("renamed")), "renamed", "swatch", "swatches"],
+    [count("board.item-removed"), "removed", "swatch", "swatches"],
+    [count("board.pair-added"), "paired", "two swatches", "pairs of swatches"],
+    [distinct((p) => p.action === "board.pair-changed"), "changed", "pair", "pairs"],
+    [count("board.pair-removed"), "unpaired", "two swatches", "pairs of swatches"],
+  ] as const;
+  const said = words.filter(([n]) => n > 0).map(([n, verb, one, many]) => (one === "two swatches" && n === 1 ? `${verb} two swatches` : `${verb} ${plural(n, one, many)}`));
+  if (parts.some((p) => p.action === "board.items-reordered")) said.push("changed which swatch sits on top");
+  const board = parts.map((p) => text(p.detail, "board")).findLast((b) => b !== null);
+  return `${said.length ? joinWords(said) : "changed"}${board ? ` on “${board}”` : " a sample board"}`;
+}
+
+export function describeAudit(action: string, detail: Detail, parts: readonly Part[] = []): string {
+  if (action === "board.edits" || action.startsWith("board.item-") || action.startsWith("board.pair-") || action === "board.items-reordered") {
+    return describeBoardEdits(parts.length ? parts : [{ action, detail }]);
+  }
   const phrase = phrases[action];
   if (phrase) return phrase(detail);
   const words = action.replace(/[._-]+/g, " ").trim();

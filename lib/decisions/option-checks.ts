@@ -1,4 +1,4 @@
-import { assessPair, type Lab, type PairAssessment, type ThresholdOverrides, type Verdict } from "@/lib/colour";
+import { assessPair, mergeThresholds, showPairFigures, type Lab, type PairAssessment, type PairFigures, type PairIntent, type ThresholdOverrides, type Thresholds, type Verdict } from "@/lib/colour";
 
 export type CheckFinish = {
   id: string;
@@ -18,6 +18,8 @@ export type OptionCheck = {
   deltaE: number;
   luminanceContrast: number;
   lrvDifference: number;
+  /** The same figures as shown, rounded so none contradicts the verdict (showPairFigures). */
+  figures: PairFigures;
 };
 
 export type OptionChecks = {
@@ -34,8 +36,16 @@ const RANK: Record<Verdict, number> = { pass: 0, borderline: 1, fail: 2 };
 /** Only a maker's published LRV outranks the one computed from the colour (PRODUCT.md). */
 const colourOf = (f: CheckFinish) => ({ lab: f.lab, ...(f.lrvSource === "published" ? { lrv: f.lrv } : {}) });
 
-function toCheck(between: string, a: PairAssessment, reason = a.reason): OptionCheck {
-  return { verdict: a.verdict, between, reason, deltaE: a.deltaE, luminanceContrast: a.luminanceContrast, lrvDifference: a.lrvDifference };
+function toCheck(between: string, a: PairAssessment, intent: PairIntent, t: Thresholds, reason = a.reason): OptionCheck {
+  return {
+    verdict: a.verdict,
+    between,
+    reason,
+    deltaE: a.deltaE,
+    luminanceContrast: a.luminanceContrast,
+    lrvDifference: a.lrvDifference,
+    figures: showPairFigures(a, intent, t),
+  };
 }
 
 function worstFirst(checks: OptionCheck[]): OptionCheck[] {
@@ -49,10 +59,13 @@ function pickShown(checks: OptionCheck[]): OptionCheck[] {
 
 /** An option shown on a sample board: every marked pair on the board, judged against its intent. */
 export function checkBoardPairs(pairs: readonly BoardPair[], thresholds?: ThresholdOverrides): OptionChecks {
+  const t = mergeThresholds(thresholds);
   const checks = pairs.map((p) =>
     toCheck(
       `${p.aLabel} and ${p.bLabel}`,
-      assessPair({ a: colourOf(p.a), b: colourOf(p.b), intent: p.intent, accessRelevant: p.accessRelevant, thresholds }),
+      assessPair({ a: colourOf(p.a), b: colourOf(p.b), intent: p.intent, accessRelevant: p.accessRelevant, thresholds: t }),
+      p.intent,
+      t,
     ),
   );
   return { source: "board", checked: checks.length, shown: pickShown(checks) };
@@ -69,18 +82,20 @@ export const NEITHER_MATCH_NOR_CONTRAST =
 export function checkFinishesTogether(finishes: readonly CheckFinish[], thresholds?: ThresholdOverrides): OptionChecks {
   const unique = finishes.filter((f, i) => finishes.findIndex((g) => g.id === f.id) === i);
   if (unique.length < 2) return { source: "none", checked: 0, shown: [] };
+  const t = mergeThresholds(thresholds);
   const checks: OptionCheck[] = [];
   for (let i = 0; i < unique.length; i++) {
     for (let j = i + 1; j < unique.length; j++) {
       const a = unique[i];
       const b = unique[j];
       if (!a || !b) continue;
-      const input = { a: colourOf(a), b: colourOf(b), accessRelevant: false, thresholds };
+      const input = { a: colourOf(a), b: colourOf(b), accessRelevant: false, thresholds: t };
       const asMatch = assessPair({ ...input, intent: "match" });
       const asContrast = assessPair({ ...input, intent: "contrast" });
-      const best = RANK[asMatch.verdict] <= RANK[asContrast.verdict] ? asMatch : asContrast;
+      const asMatchWins = RANK[asMatch.verdict] <= RANK[asContrast.verdict];
+      const [best, intent] = asMatchWins ? ([asMatch, "match"] as const) : ([asContrast, "contrast"] as const);
       const between = `${a.name} and ${b.name}`;
-      checks.push(best.verdict === "fail" ? toCheck(between, best, NEITHER_MATCH_NOR_CONTRAST) : toCheck(between, best));
+      checks.push(toCheck(between, best, intent, t, best.verdict === "fail" ? NEITHER_MATCH_NOR_CONTRAST : best.reason));
     }
   }
   return { source: "finishes", checked: checks.length, shown: pickShown(checks) };

@@ -8,7 +8,7 @@ export function shiftDay(isoDay: string, days: number): string {
 export type LeadTimeFinish = { name: string; leadTimeDays: number };
 
 export type OrderBySuggestion = {
-  /** The last day to order so the slowest finish on any option arrives by install. */
+  /** The last day to order so the slowest of the finishes given arrives by install. */
   date: string;
   leadTimeDays: number;
   /** The finish that sets the date. */
@@ -16,9 +16,10 @@ export type OrderBySuggestion = {
 };
 
 /**
- * Order-by = install date minus the longest lead time among all options' finishes: the client
- * may pick any option, so the slowest one sets the date. [published: trade process pages, see
- * DOMAIN.md — "order-by dates follow from install date minus lead time"]
+ * Order-by = install date minus the longest lead time among the finishes given. The caller picks
+ * which: for an open decision every offered option's (the client may pick any, so the slowest
+ * sets the date); for a locked one only the option it carries (db/queries/decisions.ts loadOrderBy).
+ * [published: trade process pages, see DOMAIN.md — "order-by dates follow from install date minus lead time"]
  */
 export function suggestOrderBy(installDate: string | null | undefined, finishes: readonly LeadTimeFinish[]): OrderBySuggestion | null {
   if (!installDate || finishes.length === 0) return null;

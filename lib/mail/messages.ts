@@ -140,18 +140,18 @@ export function variationMessage(input: {
 }
 
 /**
- * To an address that already has a Mottle account, when a studio tried to add it to their team:
- * nothing changed. One address is one account, so they ask for an invitation to another address.
+ * To an address that already has a Mottle account: a studio asks them onto its team, and nothing
+ * happens until they sign in and accept. Says nothing about their other studios or projects.
  */
-export function staffAddressTakenMessage(input: { studioName: string; inviterName: string; signInUrl: string }): EmailContent {
+export function studioInvitationMessage(input: { url: string; studioName: string; inviterName: string }): EmailContent {
   return renderEmail({
-    subject: `${toOneLine(input.studioName)} tried to add you to their team on Mottle`,
-    heading: "A studio tried to add you to their team",
+    subject: `${toOneLine(input.studioName)} invited you to their team on Mottle`,
+    heading: `You’re invited to join ${input.studioName}`,
     paragraphs: [
-      `${input.inviterName} at ${input.studioName} tried to add this e-mail address to their studio's team on Mottle. This address already has a Mottle account, so nothing was changed.`,
-      "One e-mail address belongs to one Mottle account. If you want to join their team, ask them to invite you at a different e-mail address.",
+      `${input.inviterName} at ${input.studioName} has invited you as a designer ${INVITATION_PURPOSE.designer(input.studioName)}.`,
+      "Sign in to Mottle with this e-mail address to accept or decline. You won’t join their team until you accept.",
     ],
-    action: { label: "Sign in to Mottle", url: input.signInUrl },
-    footnote: "If you weren’t expecting this, you can ignore this e-mail.",
+    action: { label: "Sign in to answer", url: input.url },
+    footnote: "If you weren’t expecting this invitation, you can ignore this e-mail or decline it after signing in.",
   });
 }

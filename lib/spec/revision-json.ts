@@ -1,4 +1,5 @@
 import type { SpecDiff } from "./diff";
+import type { LineChange } from "./line-change";
 import type { LineFinishDetail, StudioContact } from "./line-detail";
 import type { LineStatus } from "./status";
 import type { SpecLineContent } from "./types";
@@ -19,7 +20,13 @@ export type RevisionJson = {
   /** The canonical text the hash is of: staff only (it holds every supplier's lines). */
   content: string | null;
   lines: (SpecLineContent &
-    LineFinishDetail & { id: string; order: { orderedOn: string | null; expectedOn: string | null } | null; status: LineStatus })[];
+    LineFinishDetail & {
+      id: string;
+      order: { orderedOn: string | null; expectedOn: string | null } | null;
+      status: LineStatus;
+      /** An approved variation overtook the line after it was issued (lib/spec/line-change.ts). */
+      change: LineChange | null;
+    })[];
   acknowledgements: { supplierId: string; acknowledgedAt: string; byName: string | null; byEmail: string }[];
   changes: (SpecDiff & { since: { id: string; letter: string } }) | null;
   newer: { id: string; letter: string } | null;

@@ -1,19 +1,22 @@
 // Server-only (sharp is native); no "server-only" import so the bench can run it under plain tsx.
 import sharp from "sharp";
 import type { Sharp, SharpOptions } from "sharp";
-import { analysePhoto, PhotoInputError } from "@/lib/colour/photo";
-import type { PhotoAnalysis } from "@/lib/colour/photo";
+import { analysePhoto, PhotoInputError, PhotoNotMeasurableError } from "@/lib/colour/photo";
+import type { NeutralCard, PhotoAnalysis } from "@/lib/colour/photo";
+import { openUpright } from "@/lib/colour/photo-decode";
 import { HttpError } from "@/lib/http";
 import { MAX_PIXELS, type ImageKind } from "./limits";
 
 export type ProcessedPhoto = {
   width: number;
   height: number;
-  /** The photo re-encoded in its own format: upright, sRGB, and with no metadata at all. */
+  /** The photo re-encoded in its own format: upright, 8-bit sRGB (through its ICC profile), and with no metadata at all. */
   original: Buffer;
   large: Buffer;
   thumb: Buffer;
-  analysis: PhotoAnalysis;
+  /** null when the photo can't be measured (too much of it clipped); `notMeasured` then says why. */
+  analysis: PhotoAnalysis | null;
+  notMeasured: string | null;
 };
 
 export const LARGE_SIZE = 1600;
@@ -29,7 +32,7 @@ const webpOptions = { quality: 82, effort: 2 } as const;
 const UNREADABLE = "We couldn't read that photo: the file may be damaged or cut short. Try exporting it again.";
 
 function encodeOriginal(pipeline: Sharp, kind: ImageKind): Sharp {
-  // sharp writes no metadata (EXIF, GPS, XMP, IPTC, ICC) unless asked to, and converts to sRGB.
+  // sharp writes no metadata (EXIF, GPS, XMP, IPTC, ICC) unless asked to; openUpright has made it 8-bit sRGB.
   if (kind === "jpeg") return pipeline.jpeg(jpegOptions);
   if (kind === "png") return pipeline.png({ compressionLevel: 6 });
   if (kind === "webp") return pipeline.webp({ quality: 90, effort: 2 });
@@ -46,28 +49,39 @@ function toReadError(error: unknown): HttpError {
 const tooManyPixels = () =>
   new HttpError(422, `That photo has more than ${MAX_PIXELS / 1_000_000} megapixels. Export it smaller and try again.`);
 
-/** Reads the header only: refuses too many pixels before a single one is decoded. */
-async function checkHeader(bytes: Uint8Array): Promise<void> {
+/** Reads the header only: refuses too many pixels before a single one is decoded. Answers the bit depth. */
+async function checkHeader(bytes: Uint8Array): Promise<string> {
   const meta = await sharp(bytes, input).metadata();
   const pages = meta.pages ?? 1;
   const pageHeight = meta.pageHeight ?? meta.height;
   if (!meta.width || !pageHeight) throw new HttpError(422, UNREADABLE);
   if (meta.width * pageHeight > MAX_PIXELS || meta.width * meta.height > MAX_PIXELS * pages) throw tooManyPixels();
+  return meta.depth;
 }
 
-/** The previews and the colour analysis share one decode, at preview size. */
-async function makePreviews(bytes: Uint8Array) {
+/** The analysis, or why there is none: a clipped photo is still kept, just not measured. */
+async function measure(png: Buffer): Promise<{ analysis: PhotoAnalysis | null; notMeasured: string | null }> {
+  try {
+    return { analysis: await analysePhoto(png), notMeasured: null };
+  } catch (error) {
+    if (error instanceof PhotoNotMeasurableError) return { analysis: null, notMeasured: error.message };
+    throw error;
+  }
+}
+
+/** The previews and the colour analysis share one decode, at preview size, already in sRGB (see openUpright). */
+async function makePreviews(bytes: Uint8Array, depth: string) {
   const fit = { fit: "inside", withoutEnlargement: true } as const;
-  const mid = await sharp(bytes, input).resize(LARGE_SIZE, LARGE_SIZE, fit).raw().toBuffer({ resolveWithObject: true });
+  const mid = await openUpright(bytes, depth, input).resize(LARGE_SIZE, LARGE_SIZE, fit).raw().toBuffer({ resolveWithObject: true });
   const raw = { raw: { width: mid.info.width, height: mid.info.height, channels: mid.info.channels } };
   const large = sharp(mid.data, raw).webp(webpOptions).toBuffer();
   const small = await sharp(mid.data, raw).resize(THUMB_SIZE, THUMB_SIZE, fit).raw().toBuffer({ resolveWithObject: true });
   const smallRaw = { raw: { width: small.info.width, height: small.info.height, channels: small.info.channels } };
   const thumb = sharp(small.data, smallRaw).webp(webpOptions).toBuffer();
   // Lossless, so the analysis sees exactly the downsampled pixels (analysePhoto shrinks to 200 px anyway).
-  const analysis = sharp(small.data, smallRaw).png({ compressionLevel: 0 }).toBuffer().then((png) => analysePhoto(png));
+  const analysis = sharp(small.data, smallRaw).png({ compressionLevel: 0 }).toBuffer().then(measure);
   const [largeBuffer, thumbBuffer, measured] = await Promise.all([large, thumb, analysis]);
-  return { large: largeBuffer, thumb: thumbBuffer, analysis: measured };
+  return { large: largeBuffer, thumb: thumbBuffer, ...measured };
 }
 
 /**
@@ -77,10 +91,10 @@ async function makePreviews(bytes: Uint8Array) {
  */
 export async function processPhoto(bytes: Uint8Array, kind: ImageKind): Promise<ProcessedPhoto> {
   try {
-    await checkHeader(bytes);
+    const depth = await checkHeader(bytes);
     const [original, previews] = await Promise.all([
-      encodeOriginal(sharp(bytes, input), kind).toBuffer({ resolveWithObject: true }),
-      makePreviews(bytes),
+      encodeOriginal(openUpright(bytes, depth, input), kind).toBuffer({ resolveWithObject: true }),
+      makePreviews(bytes, depth),
     ]);
     return { width: original.info.width, height: original.info.height, original: original.data, ...previews };
   } catch (error) {
@@ -88,10 +102,10 @@ export async function processPhoto(bytes: Uint8Array, kind: ImageKind): Promise<
   }
 }
 
-/** Colour of a stored photo again, optionally corrected by a grey or white card boxed in it. */
-export async function remeasurePhoto(original: Buffer, neutral?: { left: number; top: number; width: number; height: number }) {
+/** Colour of a stored photo again, optionally corrected (cast and exposure) by a grey or white card boxed in it. */
+export async function remeasurePhoto(original: Buffer, card?: NeutralCard): Promise<PhotoAnalysis> {
   try {
-    return await analysePhoto(original, neutral ? { neutral } : {});
+    return await analysePhoto(original, card ? { card } : {});
   } catch (error) {
     throw toReadError(error);
   }

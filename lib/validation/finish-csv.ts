@@ -22,7 +22,7 @@ export const csvColumns = [
 export type CsvColumn = (typeof csvColumns)[number];
 
 /** Written on export for people to read; ignored on import. */
-export const csvInfoColumns = ["hex", "lrv_used", "lrv_source", "colour_source", "archived", "id"] as const;
+export const csvInfoColumns = ["hex", "lrv_used", "lrv_source", "colour_source", "archived", "id", "lrv_check"] as const;
 
 export const requiredCsvColumns: CsvColumn[] = ["name", "category", "unit", "unit_price", "lead_time_days"];
 

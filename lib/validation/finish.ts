@@ -160,6 +160,8 @@ export const similarQuerySchema = z.object({
       .default(3),
   ),
   limit: z.preprocess(blankToUndefined, z.coerce.number().int().min(1).max(100).default(24)),
+  /** Substitutes come from the finish's own category unless `anyCategory=1` asks for every category. */
+  anyCategory: z.preprocess(blankToUndefined, z.enum(["0", "1"], { error: "anyCategory is 1 (every category) or 0 (this finish's category)." }).default("0")).transform((v) => v === "1"),
 });
 
 /** The grey or white card the designer boxed on the photo, in pixels of the stored photo. */

@@ -33,6 +33,9 @@ const EXPECTED: Record<string, { args: unknown[]; form?: Record<string, string>;
   "app/studio/projects/[projectId]/actions.ts#inviteToProjectAction": { args: [], form: { projectId: project }, expect: projectStaff },
   // Anyone signed in may answer an invitation; an empty form (no invitation) fails validation.
   "app/welcome/actions.ts#answerInvitationAction": { args: [], expect: { ...anyone, anonymous: 401 } },
+  "app/welcome/actions.ts#answerStudioInvitationAction": { args: [], expect: { ...anyone, anonymous: 401 } },
+  // A joined designer's id: the owner gets past the gate (409, "remove them instead"); another studio's owner finds no such entry.
+  "app/studio/team/actions.ts#withdrawTeamInvitationAction": { args: [], form: { entryId: "demo-user-designer" }, expect: { ...ownersOnly, other: 404 } },
   // These forms post their ids in hidden inputs (see lib/actions/form-ids.ts), so the ids go in the form.
   "app/studio/projects/[projectId]/boards/actions.ts#createBoardAction": { args: [], form: { projectId: project }, expect: projectStaff },
   "app/studio/projects/[projectId]/specification/actions.ts#saveFixedItemAction": { args: [], form: { projectId: project }, expect: projectStaff },
@@ -43,6 +46,12 @@ const EXPECTED: Record<string, { args: unknown[]; form?: Record<string, string>;
     expect: { ...projectStaff, designer: 404 },
   },
   "app/studio/projects/[projectId]/specification/actions.ts#issueRevisionAction": { args: [], form: { projectId: project }, expect: projectStaff },
+  // The owner goes first and really confirms the laundry benchtop's line (a variation overtook it); the designer then finds it confirmed.
+  "app/studio/projects/[projectId]/specification/revisions/[revisionId]/actions.ts#confirmLineAction": {
+    args: [],
+    form: { revisionId: "demo-revision-a", lineId: "demo-spec-line-a-6" },
+    expect: projectStaff,
+  },
   // The supplier directory: an empty form fails validation; a supplier id is checked as this studio's first.
   "app/studio/suppliers/actions.ts#saveSupplierAction": { args: [], expect: studioStaff },
   "app/studio/suppliers/actions.ts#archiveSupplierAction": { args: [], form: { supplierId: "demo-supplier-stone", archived: "0" }, expect: projectStaff },

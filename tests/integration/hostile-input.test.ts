@@ -22,13 +22,15 @@ const SEGMENT_IDS: Record<string, string> = {
   revisionId: "demo-revision-a",
   lineId: "demo-spec-line-a-5",
   imageId: "no-such-image",
+  supplierId: "demo-supplier-stone",
 };
 const KEYS = [
   "title", "roomId", "allowanceCents", "dueDate", "options", "label", "priceCents", "notes", "lines", "finishId",
   "quantity", "unit", "optionId", "comment", "confirm", "reason", "priceDeltaCents", "timeImpactDays", "version",
   "x", "y", "width", "height", "itemAId", "itemBId", "intent", "accessRelevant", "order", "name", "category",
   "productCode", "surface", "format", "unitPriceCents", "leadTimeDays", "cautions", "hex", "lab", "lrv", "item",
-  "location", "orderedOn", "expectedOn", "boardId", "supplierId",
+  "location", "orderedOn", "expectedOn", "boardId", "supplierId", "trade", "contacts", "archived", "email", "phone",
+  "accountNumber",
 ];
 const odd = fc.constantFrom("\u0000", "\u202e\u202dabc", "𝕏🏠👩🏽‍🔧", "\ud800", "' OR 1=1 --", "<script>alert(1)</script>", "../../etc/passwd", "", " ");
 const money = fc.constantFrom(-1, -0.5, 0.5, 12.345, 1e308, -1e308, Number.MAX_SAFE_INTEGER + 2, "NaN", "Infinity", "12,50", "$10");

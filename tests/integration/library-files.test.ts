@@ -111,7 +111,8 @@ describe("POST /api/uploads/:id/measure", () => {
     const photo = await uploadPhoto("designer", await castPhoto(), "warm light.png", "image/png");
     const truth = parseColour(`rgb(${sage.join(", ")})`);
     const plain = await measureAs("designer", photo.id, {});
-    const corrected = await measureAs("designer", photo.id, { neutral: card });
+    // The card is rgb(170 170 170) under a lamp scaled to luminance 1: it reflects decode(170/255) = 40.2% [IEC 61966-2-1].
+    const corrected = await measureAs("designer", photo.id, { neutral: card, reflectance: 100 * decode(170 / 255) });
     expect(corrected.status).toBe(200);
     expect(corrected.body.corrected).toBe(true);
     const plainLab = (plain.body.colour as { lab: [number, number, number] }).lab;
@@ -122,7 +123,7 @@ describe("POST /api/uploads/:id/measure", () => {
   });
 
   it("answers 422 for a box outside the photo and 400 for one that isn't a box", async () => {
-    const outside = await measureAs("designer", loosePhoto, { neutral: { left: 500, top: 0, width: 10, height: 10 } });
+    const outside = await measureAs("designer", loosePhoto, { neutral: { left: 500, top: 0, width: 10, height: 10 }, reflectance: 18 });
     expect(outside.status).toBe(422);
     expect(outside.body.error).toMatch(/runs outside/);
     expect((await measureAs("designer", loosePhoto, { neutral: { left: "a" } })).status).toBe(400);

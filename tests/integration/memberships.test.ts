@@ -27,11 +27,11 @@ describe("studios and project members", () => {
     expect(await createStudioWithOwner(input)).toEqual({ created: false });
   });
 
-  it("refuses to add a designer already on this studio's staff; another studio's is added to nothing", async () => {
+  it("refuses to add a designer already on this studio's staff; another studio's is only invited", async () => {
     const owner = await actor("owner");
     expect(await status(addDesigner(owner.studio?.id ?? "", owner.userId, { email: "designer@demo.example", name: "x" }))).toBe(409);
     // The owner is told "Invitation sent" either way (app/studio/team/actions.ts); only the caller learns which.
-    expect(await addDesigner(owner.studio?.id ?? "", owner.userId, { email: "other@demo.example", name: "x" })).toEqual({ kind: "has-account", email: "other@demo.example" });
+    expect(await addDesigner(owner.studio?.id ?? "", owner.userId, { email: "other@demo.example", name: "x" })).toEqual({ kind: "invited", email: "other@demo.example" });
     expect((await actor("other")).studio?.name).toBe("Northwall Design Co.");
   });
 

@@ -175,6 +175,12 @@ export const expectations: Record<string, Expectation> = {
   "PATCH /api/revisions/[revisionId]/lines/[lineId]": { path: "/api/revisions/demo-revision-a/lines/demo-spec-line-a-5", expect: { ...staffRead, owner: 403, designer: 403, other: 403, stone: 200, joinery: 404 } },
   "PUT /api/revisions/[revisionId]/lines/[lineId]": { path: "/api/revisions/demo-revision-a/lines/demo-spec-line-a-5", expect: all(405) },
   "DELETE /api/revisions/[revisionId]/lines/[lineId]": { path: "/api/revisions/demo-revision-a/lines/demo-spec-line-a-5", expect: all(405) },
+  // "The issued line stands", tried on a line no variation changed: the project's designers get 409
+  // (nothing to confirm, nothing written), another studio 404, clients and suppliers 403.
+  "POST /api/revisions/[revisionId]/lines/[lineId]/confirmation": {
+    path: "/api/revisions/demo-revision-a/lines/demo-spec-line-a-5/confirmation",
+    expect: { ...staffRead, owner: 409, designer: 409 },
+  },
   // Corrections (project, rooms, people, staff, your own account). Removals are tried where they
   // are refused for everyone, so the seeded demo the other rows rely on stays as it was.
   "GET /account": { path: "/account", expect: as(all("ok"), { anonymous: "sign-in" }) },

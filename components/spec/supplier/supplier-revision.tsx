@@ -26,6 +26,7 @@ export function SupplierRevision({ initial }: { initial: RevisionJson }) {
   const { data: rev } = useQuery({ queryKey: revisionKey(initial.id), queryFn: () => fetchRevision(initial.id), initialData: initial });
   const ack = rev.acknowledgements[0] ?? null;
   const canRecord = Boolean(ack) && !rev.newer;
+  const overtaken = rev.lines.filter((l) => l.change?.state === "superseded").length;
   const whyNot = rev.newer
     ? `Revision ${rev.newer.letter} replaces this one: record order dates there.`
     : `Acknowledge revision ${rev.letter} above to record order dates.`;
@@ -38,6 +39,11 @@ export function SupplierRevision({ initial }: { initial: RevisionJson }) {
           Issued {formatDay(rev.issuedAt.slice(0, 10))} by {rev.issuedBy}. {rev.lines.length} {rev.lines.length === 1 ? "line" : "lines"} for you.
         </p>
       </header>
+      {!rev.newer && overtaken > 0 && (
+        <Notice tone="caution" title={overtaken === 1 ? "One of your lines has changed" : `${overtaken} of your lines have changed`}>
+          A variation was approved after this revision was issued. A new revision is coming; until then, don&apos;t order the lines marked as changed below.
+        </Notice>
+      )}
       {rev.newer && (
         <Notice tone="caution" title={`Revision ${rev.newer.letter} replaces this one`}>
           Order from the latest revision. <Link href={`/supplier/revisions/${rev.newer.id}`}>Open revision {rev.newer.letter}</Link>
@@ -62,7 +68,7 @@ export function SupplierRevision({ initial }: { initial: RevisionJson }) {
         </h2>
         <ul className="flex flex-col gap-4">
           {rev.lines.map((line) => (
-            <SupplierLineCard key={line.id} revisionId={rev.id} line={line} canRecord={canRecord} whyNot={whyNot} change={changeOf(rev, line.lineKey)} />
+            <SupplierLineCard key={line.id} revisionId={rev.id} letter={rev.letter} line={line} canRecord={canRecord} whyNot={whyNot} change={changeOf(rev, line.lineKey)} />
           ))}
         </ul>
       </section>

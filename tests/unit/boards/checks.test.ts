@@ -52,12 +52,17 @@ describe("board checks", () => {
     expect(second).toMatchObject({ pairId: "wi", verdict: "pass" });
   });
 
-  it("under a lamp judge the adapted colours and remember the daylight verdict", () => {
+  // Without the lamp's spectrum an eye adapted to the lamp sees the daylight CIELAB (lib/colour/under-light.ts;
+  // property-tested in tests/unit/colour/lamp-verdicts.test.ts), so the lamp's check is the daylight one.
+  it("under a lamp give the daylight check, and say it did not change", () => {
     const [check] = computeBoardChecks(items, pairs.slice(0, 1), 2700, defaultThresholds);
-    const warm = assessPair({ a: { lab: underLight(white, 2700), lrv: 88 }, b: { lab: underLight(oat, 2700), lrv: 48 }, intent: "match", accessRelevant: false });
-    expect(check?.deltaE).toBe(warm.deltaE);
-    expect(check?.daylight?.verdict).toBeDefined();
-    expect(check?.changed).toBe(check?.verdict !== check?.daylight?.verdict);
+    const [daylight] = computeBoardChecks(items, pairs.slice(0, 1), 6504, defaultThresholds);
+    const adapted = assessPair({ a: { lab: underLight(white, 2700), lrv: 88 }, b: { lab: underLight(oat, 2700), lrv: 48 }, intent: "match", accessRelevant: false });
+    expect(check?.deltaE).toBe(daylight?.deltaE);
+    expect(check?.deltaE).toBeCloseTo(adapted.deltaE, 9);
+    expect(check?.verdict).toBe(adapted.verdict);
+    expect(check?.daylight).toEqual({ verdict: daylight?.verdict, deltaE: daylight?.deltaE, reason: daylight?.reason });
+    expect(check?.changed).toBe(false);
   });
 
   it("count verdicts", () => {

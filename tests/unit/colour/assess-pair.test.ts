@@ -84,7 +84,7 @@ describe("assessPair — intended contrast", () => {
   });
 });
 
-describe("assessPair — access-relevant pairs", () => {
+describe("assessPair — access-relevant pairs, by the studio's one standard", () => {
   const grey: Lab = [50, 0, 0];
   const assessLrvs = (lrvA: number, lrvB: number, thresholds?: Parameters<typeof mergeThresholds>[0]) =>
     assessPair({
@@ -95,47 +95,92 @@ describe("assessPair — access-relevant pairs", () => {
       thresholds,
     });
 
-  // [published: AS 1428.1 as quoted, 30% luminance contrast minimum; BS 8300-2, 30 LRV points]
-  it("fails a pair under 30% luminance contrast and 30 LRV points, naming both", () => {
+  // [published: AS 1428.1 as quoted by access consultants (DOMAIN.md): C = 125 × (Y2 − Y1) / (Y1 + Y2 + 25), 30 % minimum]
+  it("follows AS 1428.1 unless told, naming it with the figure and the minimum", () => {
     const r = assessLrvs(20, 30);
     expect(r.luminanceContrast).toBeCloseTo((125 * 10) / 75, 9);
     expect(r.verdict).toBe("fail");
     expect(r.decidedBy).toBe("access");
+    expect(r.reason).toMatch(/^Fails AS 1428\.1: 17 % luminance contrast, 30 % needed\./);
     expect(r.reason).toMatch(/low vision/);
-    expect(r.reason).toMatch(/17% luminance contrast/);
-    expect(r.reason).toMatch(/AS 1428\.1/);
-    expect(r.reason).toMatch(/BS 8300-2/);
+    expect(r.reason).not.toMatch(/BS 8300-2/);
   });
 
-  // The AS 1428.1 worked pair 20/41 reaches 30% but is only 21 LRV points apart [published: BS 8300-2 asks for 30].
-  it("fails LRV 20 vs 41 on the LRV-point rule alone, and calls it borderline once that rule is off", () => {
-    const both = assessLrvs(20, 41);
+  // [published: BS 8300-2:2018 as quoted, at least 30 LRV points apart]
+  it("follows BS 8300-2 when chosen, in LRV points", () => {
+    const r = assessLrvs(20, 30, { accessStandard: "bs8300" });
+    expect(r.verdict).toBe("fail");
+    expect(r.reason).toMatch(/^Fails BS 8300-2: 10 LRV points apart, 30 needed\./);
+    expect(r.reason).not.toMatch(/AS 1428\.1/);
+  });
+
+  // The AS 1428.1 worked pair 20/41 reaches 30 % [published, as quoted] but is only 21 LRV points apart [published: BS 8300-2 asks for 30].
+  it("judges LRV 20 vs 41 differently by standard, and with both names the failing one first", () => {
+    const as = assessLrvs(20, 41);
+    expect(as.verdict).toBe("borderline");
+    expect(as.reason).toMatch(/^Only just passes AS 1428\.1: 31 % luminance contrast, 30 % needed\./);
+    expect(as.reason).toMatch(/measured LRVs/);
+    const bs = assessLrvs(20, 41, { accessStandard: "bs8300" });
+    expect(bs.verdict).toBe("fail");
+    expect(bs.reason).toMatch(/^Fails BS 8300-2: 21 LRV points apart, 30 needed\./);
+    const both = assessLrvs(20, 41, { accessStandard: "both" });
     expect(both.verdict).toBe("fail");
-    expect(both.reason).toMatch(/21 LRV points apart/);
-    expect(both.reason).not.toMatch(/AS 1428\.1/);
-    const asOnly = assessLrvs(20, 41, { access: { minLrvDifference: 0 } });
-    expect(asOnly.verdict).toBe("borderline");
-    expect(asOnly.reason).toMatch(/only just/i);
+    expect(both.reason).toMatch(/^Fails BS 8300-2: 21 LRV points apart, 30 needed\. Only just passes AS 1428\.1: 31 % luminance contrast, 30 % needed\./);
   });
 
-  it("calls a pair just over both minimums borderline [memory: LRVs vary a few points by batch and meter]", () => {
-    const r = assessLrvs(20, 52);
-    expect(r.luminanceContrast).toBeGreaterThan(30);
+  // The demo's case: 45 % passes AS 1428.1's 30 % [published, as quoted] while 25 points misses BS 8300-2's 30 [published, as quoted].
+  it("passes 45 % luminance contrast under AS 1428.1 even though the pair is 25 LRV points apart", () => {
+    const as = assessLrvs(10, 35);
+    expect(as.luminanceContrast).toBeCloseTo((125 * 25) / 70, 9);
+    expect(as.verdict).toBe("pass");
+    expect(as.reason).toBe("Passes AS 1428.1: 45 % luminance contrast, 30 % needed. Enough light–dark difference for people with low vision.");
+    expect(assessLrvs(10, 35, { accessStandard: "both" }).verdict).toBe("fail");
+  });
+
+  it("never rounds a shortfall up to the minimum: 29.97 % is said as 29.97 % [rounding rule, lib/colour/figures.ts]", () => {
+    const r = assessLrvs(20, 40.5);
+    expect(r.luminanceContrast).toBeCloseTo((125 * 20.5) / 85.5, 9);
+    expect(r.verdict).toBe("fail");
+    expect(r.reason).toMatch(/^Fails AS 1428\.1: 29\.97 % luminance contrast, 30 % needed\./);
+  });
+
+  it("calls a pair just over the minimum borderline [memory: LRVs vary a few points by batch and meter]", () => {
+    const r = assessLrvs(20, 52, { accessStandard: "bs8300" });
     expect(r.lrvDifference).toBe(32);
     expect(r.verdict).toBe("borderline");
-    expect(r.reason).toMatch(/measured LRVs/);
+    expect(r.reason).toMatch(/^Only just passes BS 8300-2: 32 LRV points apart, 30 needed\..*measured LRVs/);
   });
 
-  it("passes a pair well clear of both minimums [published: AS 1428.1 as quoted; BS 8300-2]", () => {
-    const r = assessLrvs(15, 80);
-    expect(r.verdict).toBe("pass");
-    expect(r.reason).toMatch(/Enough light–dark difference/);
+  it("says when a studio moved the standard's minimum [project spec]", () => {
+    const r = assessLrvs(20, 52, { access: { minLuminanceContrast: 45 } });
+    expect(r.verdict).toBe("fail");
+    expect(r.reason).toMatch(/^Fails AS 1428\.1: 41 % luminance contrast, 45 % needed \(the studio's figure; the standard as quoted asks for 30 %\)\./);
+  });
+
+  it("passes a pair well clear of both minimums under either standard [published: AS 1428.1 as quoted; BS 8300-2]", () => {
+    for (const accessStandard of ["as1428", "bs8300", "both"] as const) {
+      const r = assessLrvs(15, 80, { accessStandard });
+      expect(r.verdict).toBe("pass");
+      expect(r.reason).toMatch(/Enough light–dark difference/);
+    }
+  });
+
+  it("names the standard's result even when the colour finding decides [project rule: every access verdict names its standard]", () => {
+    // ΔE00 ≈ 7 between L* 46.5 and 53.5 is a gentle (borderline) contrast [memory: house rule], while LRVs 10 and 80 pass easily.
+    const r = assessPair({ a: { lab: [46.5, 0, 0], lrv: 10 }, b: { lab: [53.5, 0, 0], lrv: 80 }, intent: "contrast", accessRelevant: true });
+    expect(r.verdict).toBe("borderline");
+    expect(r.decidedBy).toBe("contrast");
+    expect(r.reason).toMatch(/^A gentle contrast.* Passes AS 1428\.1: \d+ % luminance contrast, 30 % needed\./);
   });
 
   it("fails an intended match where access needs contrast, for the access reason [project decision: access outranks intent]", () => {
     const r = assessPair({ a: { lab: grey }, b: { lab: grey }, intent: "match", accessRelevant: true });
     expect(r.verdict).toBe("fail");
     expect(r.decidedBy).toBe("access");
+  });
+
+  it("refuses an access standard it does not know [project spec: as1428 | bs8300 | both]", () => {
+    expect(() => mergeThresholds({ accessStandard: "ada" as never })).toThrow(RangeError);
   });
 });
 

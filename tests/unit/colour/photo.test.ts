@@ -68,6 +68,8 @@ describe("analysePhoto", () => {
     const lamp: Rgb = [1.765, 0.845, 0.272];
     const grey: Rgb = [170, 170, 170];
     const card = { left: 10, top: 10, width: 30, height: 24 };
+    // The card is rgb(170 170 170) under a lamp of luminance 1, so it reflects decode(170/255) = 40.2%.
+    const withCard = { card: { box: card, reflectance: decode(170 / 255) } };
     const random = createSeededRandom(3000);
     const castPhoto = (truth: Rgb) =>
       makePng(160, 120, (x, y) => {
@@ -84,7 +86,7 @@ describe("analysePhoto", () => {
     ])("recovers %s within ΔE00 2 once the card is given, and is further off without it", async (_, truth) => {
       const png = await castPhoto(truth);
       const plain = await analysePhoto(png);
-      const fixed = await analysePhoto(png, { neutral: card });
+      const fixed = await analysePhoto(png, withCard);
       expect(fixed.corrected).toBe(true);
       const errorFixed = deltaE2000(fixed.representative, labOf(truth));
       const errorPlain = deltaE2000(plain.representative, labOf(truth));
@@ -93,7 +95,7 @@ describe("analysePhoto", () => {
     });
 
     it("leaves the card itself out of the palette [project decision: the card is not the finish]", async () => {
-      const fixed = await analysePhoto(await castPhoto(sage), { neutral: card });
+      const fixed = await analysePhoto(await castPhoto(sage), withCard);
       expect(fixed.palette).toHaveLength(1);
     });
 
@@ -101,7 +103,7 @@ describe("analysePhoto", () => {
       const png = await castPhoto(sage);
       // Stored rotated 90° anticlockwise with EXIF 6, so it displays exactly as the original.
       const stored = await sharp(png).rotate(-90).withMetadata({ orientation: 6 }).png().toBuffer();
-      const fixed = await analysePhoto(stored, { neutral: card });
+      const fixed = await analysePhoto(stored, withCard);
       expect(deltaE2000(fixed.representative, labOf(sage))).toBeLessThan(2);
     });
   });
@@ -114,7 +116,7 @@ describe("analysePhoto", () => {
     { left: 0.5, top: 0, width: 10, height: 10 },
   ])("throws PhotoInputError for an unusable card box %j [project spec]", async (neutral) => {
     const png = await makePng(160, 120, () => sage);
-    await expect(analysePhoto(png, { neutral })).rejects.toThrow(PhotoInputError);
+    await expect(analysePhoto(png, { card: { box: neutral, reflectance: 0.18 } })).rejects.toThrow(PhotoInputError);
   });
 
   it("throws PhotoInputError for something that isn't an image [project spec]", async () => {

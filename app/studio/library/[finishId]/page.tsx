@@ -8,6 +8,7 @@ import { FinishForm } from "@/components/library/finish-form";
 import { FinishRemoval } from "@/components/library/finish-removal";
 import { libraryKeys } from "@/components/library/library-api";
 import { FinishUsageCard } from "@/components/library/finish-usage";
+import { LrvNotice } from "@/components/library/lrv-flag";
 import { SimilarFinishes } from "@/components/library/similar-finishes";
 import { LinkButton, Notice, PageHeader } from "@/components/ui";
 import { requireRole } from "@/lib/auth/session";
@@ -27,7 +28,7 @@ export default async function FinishPage({ params, searchParams }: Props) {
     listActiveSuppliers(actor.studio?.id ?? ""),
     queryClient.prefetchQuery({
       queryKey: libraryKeys.similar(finish.id, 3),
-      queryFn: async () => ({ maxDeltaE: 3, items: await listSimilarFinishes(actor, finish.id, 3, 24) }),
+      queryFn: async () => ({ maxDeltaE: 3, anyCategory: false, items: await listSimilarFinishes(actor, finish.id, 3, 24) }),
     }),
   ]);
   const { added } = await searchParams;
@@ -49,6 +50,7 @@ export default async function FinishPage({ params, searchParams }: Props) {
         }
       />
       {added && <p role="status" className="rounded-md bg-ok-wash px-3 py-2 text-ok-ink">Finish added to the library.</p>}
+      <LrvNotice finish={finish} />
       {finish.archived && (
         <Notice tone="caution" title="This finish is archived">
           It stays on the boards, decisions and specifications that use it, but isn&apos;t offered for new work.
@@ -58,7 +60,7 @@ export default async function FinishPage({ params, searchParams }: Props) {
         <FinishForm key={finish.id} finishId={finish.id} initial={draftFromFinish(finish)} suppliers={supplierOptions} />
         <aside className="flex flex-col gap-6" aria-label="About this finish">
           <HydrationBoundary state={dehydrate(queryClient)}>
-            <SimilarFinishes key={finish.id} finishId={finish.id} leadTimeDays={finish.leadTimeDays} />
+            <SimilarFinishes key={finish.id} finishId={finish.id} category={finishCategoryLabels[finish.category]} leadTimeDays={finish.leadTimeDays} />
           </HydrationBoundary>
           <FinishUsageCard usage={finish.usage} />
           <FinishRemoval finishId={finish.id} archived={finish.archived} removalBlock={describeRemovalBlock(finish.usage)} />

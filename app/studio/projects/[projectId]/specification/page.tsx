@@ -2,7 +2,8 @@ import type { Metadata } from "next";
 import { getSpecificationView } from "@/db/queries/spec";
 import { listFixedItems } from "@/db/queries/spec-fixed-items";
 import { readContacts } from "@/db/queries/spec-handoff-view";
-import { listRevisionsForActor } from "@/db/queries/spec-revision-view";
+import { listChangedIssuedLines, listRevisionsForActor } from "@/db/queries/spec-revision-view";
+import { ChangedLines } from "@/components/spec/changed-lines";
 import { CautionNotes } from "@/components/spec/caution-notes";
 import { FixedItemList } from "@/components/spec/fixed-item-list";
 import { IssueRevisionForm } from "@/components/spec/issue-revision-form";
@@ -25,8 +26,13 @@ type Props = { params: Promise<{ projectId: string }>; searchParams: Promise<{ v
 export default async function SpecificationPage({ params, searchParams }: Props) {
   const [{ projectId }, { view, issue }] = await Promise.all([params, searchParams]);
   const actor = await requireRole("designer");
-  const [spec, revisions, fixed] = await pageGuard(
-    Promise.all([getSpecificationView(actor, projectId), listRevisionsForActor(actor, projectId), listFixedItems(actor, projectId)]),
+  const [spec, revisions, fixed, changedIssued] = await pageGuard(
+    Promise.all([
+      getSpecificationView(actor, projectId),
+      listRevisionsForActor(actor, projectId),
+      listFixedItems(actor, projectId),
+      listChangedIssuedLines(actor, projectId),
+    ]),
   );
   const contacts = await readContacts(spec.project.id);
   const base = `/studio/projects/${spec.project.id}/specification`;
@@ -71,6 +77,15 @@ export default async function SpecificationPage({ params, searchParams }: Props)
           />
         }
       />
+      {changedIssued && changedIssued.lines.length > 0 && (
+        <Section
+          id="changed-lines"
+          title={`Issued lines a variation has changed (revision ${changedIssued.revision.letter})`}
+          description="Their suppliers can't record an order on them until you issue a new revision, or confirm the issued line stands."
+        >
+          <ChangedLines revisionId={changedIssued.revision.id} letter={changedIssued.revision.letter} lines={changedIssued.lines} canConfirm />
+        </Section>
+      )}
       <div className="flex flex-wrap items-center justify-between gap-3">
         <h2 className="sr-only">Schedule</h2>
         <ViewSwitch basePath={base} current={grouping} />

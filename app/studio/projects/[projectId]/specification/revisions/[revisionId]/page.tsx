@@ -3,6 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { getRevisionView } from "@/db/queries/spec-revision-view";
 import { CautionNotes } from "@/components/spec/caution-notes";
+import { ChangedLines } from "@/components/spec/changed-lines";
 import { DiffList } from "@/components/spec/diff-list";
 import { RevisionHash } from "@/components/spec/revision-hash";
 import { RevisionSuppliers } from "@/components/spec/revision-suppliers";
@@ -28,6 +29,7 @@ export default async function RevisionPage({ params, searchParams }: Props) {
   const notes = cautionsAcross(rev.lines);
   const numbers = new Map(notes.map((n, i) => [n.key, i + 1]));
   const { letter } = rev.revision;
+  const changed = rev.lines.flatMap((l) => (l.change ? [{ ...l, change: l.change }] : []));
   return (
     <div className="flex flex-col gap-8">
       <PageHeader
@@ -56,6 +58,11 @@ export default async function RevisionPage({ params, searchParams }: Props) {
           <RevisionSuppliers revisionId={rev.revision.id} suppliers={rev.suppliers} acknowledgements={rev.acknowledgements} />
         </Card>
       </div>
+      {changed.length > 0 && (
+        <Card title="Lines a variation has changed since this revision">
+          <ChangedLines revisionId={rev.revision.id} letter={letter} lines={changed} canConfirm />
+        </Card>
+      )}
       <Card title={rev.baseline ? `What changed since revision ${rev.baseline.letter}` : "What changed"}>
         {rev.changes ? (
           <DiffList diff={rev.changes} empty={`Nothing changed since revision ${rev.baseline?.letter ?? ""}.`} />
