@@ -40,8 +40,11 @@ const { startMailCatcher } = await import("../lib/mail/catcher");
 const catcher = await startMailCatcher({ port: catcherPort, dir: env.MAIL_CATCHER_DIR ?? "" });
 const server = await startNext(port, env, true, "127.0.0.1");
 let failed = false;
-// The permission matrix first, on the freshly seeded database, then the flows that change it.
-const suites = only.length ? [only] : [["tests/e2e/permission-matrix.test.ts"], ["--exclude", "tests/e2e/permission-matrix.test.ts"]];
+// First, on the freshly seeded database, the files that read the seed as it is (the permission
+// matrix only sends bodies that are refused; records reads the demo's history); then the flows
+// that change it.
+const readsSeed = ["tests/e2e/permission-matrix.test.ts", "tests/e2e/records.test.ts"];
+const suites = only.length ? [only] : [readsSeed, readsSeed.flatMap((file) => ["--exclude", file])];
 try {
   for (const suite of suites) {
     await run("npx", ["vitest", "run", "--config", "vitest.e2e.config.ts", ...suite], env).catch((error: unknown) => {

@@ -163,15 +163,3 @@ export const similarQuerySchema = z.object({
   /** Substitutes come from the finish's own category unless `anyCategory=1` asks for every category. */
   anyCategory: z.preprocess(blankToUndefined, z.enum(["0", "1"], { error: "anyCategory is 1 (every category) or 0 (this finish's category)." }).default("0")).transform((v) => v === "1"),
 });
-
-/** The grey or white card the designer boxed on the photo, in pixels of the stored photo. */
-export const measureSchema = z.object({
-  neutral: z
-    .object({
-      left: z.number().int().min(0),
-      top: z.number().int().min(0),
-      width: z.number().int().min(1, "Draw a box at least a few pixels wide."),
-      height: z.number().int().min(1, "Draw a box at least a few pixels high."),
-    })
-    .optional(),
-});
