@@ -103,7 +103,3 @@ export async function listSuppliers(studioId: string) {
     .where(and(eq(suppliers.studioId, studioId), isNull(suppliers.archivedAt)))
     .orderBy(asc(suppliers.name));
 }
-
-export async function getSupplierInStudio(studioId: string, supplierId: string) {
-  return db.query.suppliers.findFirst({ where: and(eq(suppliers.studioId, studioId), eq(suppliers.id, supplierId)) });
-}

@@ -24,7 +24,3 @@ export function supplierIdFor(actor: Actor, projectId: string): string | null {
 export function clientProjectIds(actor: Actor) {
   return actor.projects.filter((p) => p.role === "client").map((p) => p.projectId);
 }
-
-export function supplierProjectIds(actor: Actor) {
-  return actor.projects.filter((p) => p.role === "supplier").map((p) => p.projectId);
-}
