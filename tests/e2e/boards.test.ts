@@ -53,7 +53,7 @@ describe("a designer composes a sample board", () => {
     await signInWithPassword(designer, "designer@demo.example");
     await designer.waitForURL(/\/studio$/);
     await designer.goto("/studio/projects/demo-project-marrow/boards");
-    await designer.getByLabel("Room").selectOption({ label: "Laundry" });
+    await designer.getByLabel("Room", { exact: true }).selectOption({ label: "Laundry" });
     await designer.getByLabel("Board name").fill(boardName);
     await designer.getByRole("button", { name: "Start the board" }).click();
     await designer.waitForURL(/\/boards\/[^/]+$/);

@@ -42,7 +42,7 @@ describe("records on a phone", () => {
   });
 
   it("the client sees the same facts", async () => {
-    const page = await signedIn(`/client/decisions/${laundry}`, (p) => signInWithLink(p, "client@demo.example"));
+    const page = await signedIn(`/client/decisions/${laundry}`, (p) => signInWithLink(p, "client2@demo.example"));
     await expect.poll(() => page.getByTestId("locked-by").textContent()).toMatch(/Callum Haddad on 26 Nov 2026/);
     await snap(page, "records-laundry-client");
     await page.context().close();
